@@ -1,0 +1,31 @@
+import { fileURLToPath } from 'node:url';
+import { defineConfig } from 'vitest/config';
+import react from '@vitejs/plugin-react';
+import tailwindcss from '@tailwindcss/vite';
+
+const here = (p: string) => fileURLToPath(new URL(p, import.meta.url));
+const apiPort = Number(process.env.PORT ?? 3000);
+
+// One config for the client build, the dev server and vitest (a vitest.config.ts would shadow it).
+export default defineConfig({
+  plugins: [react(), tailwindcss()],
+  resolve: {
+    alias: { '@shared': here('./shared'), '@': here('./src') },
+  },
+  // convert-units 2.x reads Node's `global` in the browser.
+  define: { global: 'globalThis' },
+  build: { outDir: 'dist/client', emptyOutDir: true },
+  server: {
+    port: Number(process.env.VITE_PORT ?? 5173),
+    proxy: { '/api': `http://127.0.0.1:${apiPort}`, '/s/': `http://127.0.0.1:${apiPort}` },
+  },
+  test: {
+    include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'tests/**/*.test.{ts,tsx}'],
+    environment: 'node',
+    testTimeout: 30_000,
+    hookTimeout: 60_000,
+    // 2 cores: e2e files start Chromium; keep files in separate forks but few at once.
+    pool: 'forks',
+    maxWorkers: 2,
+  },
+});
