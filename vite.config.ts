@@ -8,18 +8,22 @@ const apiPort = Number(process.env.PORT ?? 3000);
 
 // One config for the client build, the dev server and vitest (a vitest.config.ts would shadow it).
 export default defineConfig({
+  // index.html lives in src/ (the repository's top level is fixed).
+  root: here('./src'),
+  publicDir: false,
   plugins: [react(), tailwindcss()],
   resolve: {
     alias: { '@shared': here('./shared'), '@': here('./src') },
   },
   // convert-units 2.x reads Node's `global` in the browser.
   define: { global: 'globalThis' },
-  build: { outDir: 'dist/client', emptyOutDir: true },
+  build: { outDir: here('./dist/client'), emptyOutDir: true },
   server: {
     port: Number(process.env.VITE_PORT ?? 5173),
     proxy: { '/api': `http://127.0.0.1:${apiPort}`, '/s/': `http://127.0.0.1:${apiPort}` },
   },
   test: {
+    root: here('.'),
     include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'tests/**/*.test.{ts,tsx}'],
     environment: 'node',
     testTimeout: 30_000,
