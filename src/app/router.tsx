@@ -1,0 +1,58 @@
+import type { ComponentType } from 'react';
+import { createBrowserRouter, type LoaderFunction } from 'react-router-dom';
+import type { QueryClient } from '@tanstack/react-query';
+import { paths } from './paths.ts';
+import { RootLayout, RootHydrateFallback } from './routes/root.tsx';
+import { RouteErrorBoundary } from './routes/route-error-boundary.tsx';
+
+/**
+ * What a lazy route module exports. `clientLoader` receives the query client and returns
+ * the loader; loaders only warm the cache (`ensureQueryData`), components read it.
+ */
+export interface RouteModule {
+  Component: ComponentType;
+  ErrorBoundary?: ComponentType;
+  clientLoader?: (queryClient: QueryClient) => LoaderFunction;
+}
+
+interface LazyRoute {
+  Component: ComponentType;
+  ErrorBoundary?: ComponentType;
+  loader?: LoaderFunction;
+}
+
+function convert(queryClient: QueryClient) {
+  return (m: RouteModule): LazyRoute => ({
+    Component: m.Component,
+    ...(m.ErrorBoundary ? { ErrorBoundary: m.ErrorBoundary } : {}),
+    ...(m.clientLoader ? { loader: m.clientLoader(queryClient) } : {}),
+  });
+}
+
+export function createAppRouter(queryClient: QueryClient) {
+  const load = convert(queryClient);
+  return createBrowserRouter([
+    {
+      path: paths.home.path,
+      Component: RootLayout,
+      HydrateFallback: RootHydrateFallback,
+      ErrorBoundary: RouteErrorBoundary,
+      children: [
+        {
+          id: 'auth-layout',
+          lazy: () => import('./routes/auth/layout.tsx').then(load),
+          children: [
+            { path: paths.auth.signIn.path, lazy: () => import('./routes/auth/sign-in.tsx').then(load) },
+            { path: paths.auth.signUp.path, lazy: () => import('./routes/auth/sign-up.tsx').then(load) },
+          ],
+        },
+        {
+          id: 'app-layout',
+          lazy: () => import('./routes/app/layout.tsx').then(load),
+          children: [{ index: true, lazy: () => import('./routes/app/workbench.tsx').then(load) }],
+        },
+        { path: '*', lazy: () => import('./routes/not-found.tsx').then(load) },
+      ],
+    },
+  ]);
+}

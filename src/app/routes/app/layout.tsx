@@ -1,0 +1,89 @@
+import { Suspense } from 'react';
+import { Navigate, NavLink, Outlet, useLocation, useNavigate, type LoaderFunction } from 'react-router-dom';
+import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
+import { meQueryOptions } from '@/features/auth/api/queries.ts';
+import { useSignOut } from '@/features/auth/api/mutations.ts';
+import { RoleBadge } from '@/features/auth/components/role-badge.tsx';
+import { Wordmark } from '@/components/ui/brand-mark.tsx';
+import { Button } from '@/components/ui/button.tsx';
+import { cx } from '@/components/ui/cx.ts';
+import { paths } from '../../paths.ts';
+import { RouteErrorBoundary } from '../route-error-boundary.tsx';
+
+export const clientLoader = (queryClient: QueryClient): LoaderFunction => async () => {
+  await queryClient.ensureQueryData(meQueryOptions());
+  return null;
+};
+
+interface NavItem {
+  to: string;
+  label: string;
+  end?: boolean;
+}
+
+function navItems(): NavItem[] {
+  return [{ to: paths.home.getHref(), label: 'Workbench', end: true }];
+}
+
+/** The signed-in shell: who you are, which shop, what you may do, and the screens. */
+export function Component() {
+  const { data: me } = useSuspenseQuery(meQueryOptions());
+  const location = useLocation();
+  const navigate = useNavigate();
+  const signOut = useSignOut();
+
+  if (!me) return <Navigate to={paths.auth.signIn.getHref(location.pathname + location.search)} replace />;
+
+  return (
+    <div className="flex min-h-screen flex-col">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-4 focus:top-3 focus:z-50 focus:rounded focus:bg-paper focus:px-3 focus:py-2">
+        Skip to content
+      </a>
+      <header className="border-b border-hide-800 bg-hide-900 text-hide-100">
+        <div className="mx-auto flex h-16 max-w-7xl items-center gap-6 px-4 sm:px-6">
+          <Wordmark className="text-lg text-paper" />
+          <nav aria-label="Main" className="flex items-center gap-1">
+            {navItems().map((item) => (
+              <NavLink
+                key={item.to}
+                to={item.to}
+                end={item.end ?? false}
+                className={({ isActive }) =>
+                  cx('rounded-md px-3 py-1.5 text-sm font-medium transition-colors', isActive ? 'bg-hide-700 text-paper' : 'text-hide-200 hover:bg-hide-800 hover:text-paper')
+                }
+              >
+                {item.label}
+              </NavLink>
+            ))}
+          </nav>
+          <div className="ml-auto flex items-center gap-4">
+            <div className="text-right leading-tight" data-testid="shell-identity">
+              <p className="text-sm font-semibold text-paper" data-testid="shop-name">
+                {me.shop.name}
+              </p>
+              <p className="flex items-center justify-end gap-2 text-xs text-hide-300">
+                <span>{me.user.name}</span>
+                <RoleBadge role={me.role} />
+              </p>
+            </div>
+            <Button
+              variant="secondary"
+              size="sm"
+              busy={signOut.isPending}
+              onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate(paths.auth.signIn.getHref(), { replace: true }) })}
+            >
+              Sign out
+            </Button>
+          </div>
+        </div>
+      </header>
+      <main id="main" className="mx-auto w-full max-w-7xl flex-1 px-4 py-8 sm:px-6">
+        <Suspense fallback={<p role="status" className="text-hide-600">Loading…</p>}>
+          <Outlet />
+        </Suspense>
+      </main>
+    </div>
+  );
+}
+
+export const ErrorBoundary = RouteErrorBoundary;
