@@ -1,0 +1,17 @@
+// Knex CLI settings (`npm run db:migrate|db:rollback|db:seed`, run through tsx). The CLI
+// switches into db/, so paths are resolved from the repository root here.
+import { fileURLToPath } from 'node:url';
+import { resolve } from 'node:path';
+import { knexConfig } from '../server/db/connection.ts';
+
+const root = fileURLToPath(new URL('..', import.meta.url));
+const file = resolve(root, process.env.DATABASE_FILE || 'data/latchet.sqlite3');
+const base = knexConfig(file);
+
+export default {
+  ...base,
+  // The CLI reads the folder so `migrate:make` works; the names it records are the file
+  // names, the same ones server/db/migration-source.ts reports.
+  migrations: { directory: resolve(root, 'db/migrations'), extension: 'ts', loadExtensions: ['.ts'] },
+  seeds: { directory: resolve(root, 'db/seeds'), extension: 'ts', loadExtensions: ['.ts'] },
+};

@@ -1,0 +1,78 @@
+// createApp builds the Express app from its parts; it never listens (tests drive it in-process).
+import { fileURLToPath } from 'node:url';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import type { Knex } from 'knex';
+import type { Config } from './config.ts';
+import { requireJsonBody } from './http/content-type.ts';
+import { apiNotFound, errorHandler } from './http/error-handler.ts';
+import { originCheck } from './http/origin-check.ts';
+import { createLucia, sessionMiddleware } from './http/session.ts';
+import { serveClient } from './http/static-client.ts';
+import { createAuthRepository } from './modules/auth/auth.repository.ts';
+import { authRoutes } from './modules/auth/auth.routes.ts';
+import { createAuthService } from './modules/auth/auth.service.ts';
+import { healthRoutes } from './modules/health/health.routes.ts';
+
+export interface AppDeps {
+  db: Knex;
+  config: Config;
+  /** Folder of the built client; default dist/client. Served only when it holds index.html. */
+  clientDir?: string;
+  /** Where unexpected errors are logged (default console.error). */
+  log?: (err: unknown) => void;
+}
+
+/** Default location of the client build. */
+export const CLIENT_DIR = fileURLToPath(new URL('../dist/client', import.meta.url));
+
+export function createApp({ db, config, clientDir = CLIENT_DIR, log }: AppDeps): Express {
+  const app = express();
+  app.set('trust proxy', config.trustProxy);
+  app.disable('x-powered-by');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: false,
+        // Only our own origin: the SPA's bundled scripts, styles and self-hosted fonts;
+        // data:/blob: images for previews and downloads. No outside host anywhere.
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          scriptSrcAttr: ["'none'"],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          fontSrc: ["'self'", 'data:'],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          connectSrc: ["'self'"],
+          workerSrc: ["'self'", 'blob:'],
+          objectSrc: ["'none'"],
+          baseUri: ["'self'"],
+          formAction: ["'self'"],
+          frameAncestors: ["'self'"],
+        },
+      },
+    }),
+  );
+
+  const authRepo = createAuthRepository(db);
+  const lucia = createLucia(authRepo, config);
+  const authService = createAuthService(db, authRepo, lucia);
+
+  const api = express.Router();
+  api.use(originCheck(config.publicOrigin));
+  api.use(requireJsonBody());
+  api.use(express.json({ limit: config.jsonLimitBytes }));
+  api.use(sessionMiddleware(lucia, authRepo, config));
+  api.use((_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
+  api.use(healthRoutes(db));
+  api.use(authRoutes(authService, lucia, config));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  serveClient(app, clientDir);
+  app.use(errorHandler(log));
+  return app;
+}

@@ -1,0 +1,91 @@
+// The environment, parsed once at boot. A bad value stops the process with one readable
+// list of every problem instead of failing later in the middle of a request.
+import { z } from 'zod';
+
+const intIn = (name: string, min: number, max: number, fallback: number) =>
+  z.coerce
+    .number({ error: `${name} must be a number` })
+    .int({ error: `${name} must be a whole number` })
+    .min(min, { error: `${name} must be at least ${min}` })
+    .max(max, { error: `${name} must be at most ${max}` })
+    .default(fallback);
+
+const EnvSchema = z.object({
+  NODE_ENV: z.enum(['development', 'test', 'production'], { error: 'NODE_ENV must be development, test or production' }).default('development'),
+  PORT: intIn('PORT', 0, 65535, 3000),
+  HOST: z.string().min(1).default('0.0.0.0'),
+  DATABASE_FILE: z.string().min(1, { error: 'DATABASE_FILE must not be empty' }).default('data/latchet.sqlite3'),
+  /** Where users reach the app; the Origin check accepts it and mail links start with it. */
+  PUBLIC_ORIGIN: z.url({ error: 'PUBLIC_ORIGIN must be a URL such as http://localhost:3000' }).optional(),
+  /** Hard cap on a session's age, however active it stays (lucia only slides). */
+  SESSION_ABSOLUTE_HOURS: intIn('SESSION_ABSOLUTE_HOURS', 1, 24 * 365, 24 * 30),
+  /** Idle lifetime of a session; lucia extends it while the session is used. */
+  SESSION_IDLE_HOURS: intIn('SESSION_IDLE_HOURS', 1, 24 * 365, 24 * 14),
+  /** Failed sign-in/sign-up attempts allowed per client address and window. */
+  AUTH_RATE_LIMIT: intIn('AUTH_RATE_LIMIT', 1, 10_000, 20),
+  AUTH_RATE_WINDOW_MINUTES: intIn('AUTH_RATE_WINDOW_MINUTES', 1, 24 * 60, 15),
+  /** JSON request bodies larger than this answer 413. */
+  JSON_LIMIT_KB: intIn('JSON_LIMIT_KB', 1, 10_240, 256),
+  /** Express "trust proxy": set when a reverse proxy terminates TLS in front of us. */
+  TRUST_PROXY: z.enum(['0', '1', 'true', 'false']).default('0'),
+  SMTP_HOST: z.string().min(1).optional(),
+  SMTP_PORT: intIn('SMTP_PORT', 1, 65535, 2525),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  SMTP_SECURE: z.enum(['true', 'false']).default('false'),
+  MAIL_FROM: z.string().min(3).default('Latchet <no-reply@latchet.example>'),
+});
+
+/** The app's settings, derived from the environment. */
+export interface Config {
+  env: 'development' | 'test' | 'production';
+  port: number;
+  host: string;
+  databaseFile: string;
+  /** e.g. http://localhost:3000, no trailing slash. */
+  publicOrigin: string;
+  sessionAbsoluteMs: number;
+  sessionIdleMs: number;
+  authRateLimit: number;
+  authRateWindowMs: number;
+  jsonLimitBytes: number;
+  trustProxy: boolean;
+  smtp: { host: string | undefined; port: number; user: string | undefined; password: string | undefined; secure: boolean };
+  mailFrom: string;
+}
+
+/** Thrown with every problem of the environment listed, one per line. */
+export class ConfigError extends Error {
+  constructor(readonly problems: string[]) {
+    super(`Latchet cannot start; fix the environment:\n${problems.map((p) => `  - ${p}`).join('\n')}`);
+    this.name = 'ConfigError';
+  }
+}
+
+const HOUR_MS = 3_600_000;
+
+/** Parse `env` (default process.env) into a Config or throw a ConfigError listing every problem. */
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
+  // Empty strings mean "not set" so `PORT= npm start` behaves like leaving PORT out.
+  const cleaned = Object.fromEntries(Object.entries(env).filter(([, v]) => v !== undefined && v !== ''));
+  const parsed = EnvSchema.safeParse(cleaned);
+  if (!parsed.success) {
+    throw new ConfigError(parsed.error.issues.map((i) => `${i.path.join('.') || 'environment'}: ${i.message}`));
+  }
+  const e = parsed.data;
+  return {
+    env: e.NODE_ENV,
+    port: e.PORT,
+    host: e.HOST,
+    databaseFile: e.DATABASE_FILE,
+    publicOrigin: (e.PUBLIC_ORIGIN ?? `http://localhost:${e.PORT}`).replace(/\/+$/, ''),
+    sessionAbsoluteMs: e.SESSION_ABSOLUTE_HOURS * HOUR_MS,
+    sessionIdleMs: e.SESSION_IDLE_HOURS * HOUR_MS,
+    authRateLimit: e.AUTH_RATE_LIMIT,
+    authRateWindowMs: e.AUTH_RATE_WINDOW_MINUTES * 60_000,
+    jsonLimitBytes: e.JSON_LIMIT_KB * 1024,
+    trustProxy: e.TRUST_PROXY === '1' || e.TRUST_PROXY === 'true',
+    smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT, user: e.SMTP_USER, password: e.SMTP_PASSWORD, secure: e.SMTP_SECURE === 'true' },
+    mailFrom: e.MAIL_FROM,
+  };
+}

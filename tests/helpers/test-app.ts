@@ -1,0 +1,47 @@
+// A fresh, fully migrated SQLite database per call and the app built on it. Shared by the
+// API tests (supertest on `app`) and the end-to-end tests (startTestServer).
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import type { Express } from 'express';
+import type { Knex } from 'knex';
+import { createApp, type AppDeps } from '../../server/app.ts';
+import { loadConfig, type Config } from '../../server/config.ts';
+import { migrateLatest, openDb } from '../../server/db/connection.ts';
+
+export interface TestApp {
+  app: Express;
+  db: Knex;
+  config: Config;
+  /** Closes the database and deletes its folder. */
+  close(): Promise<void>;
+}
+
+export interface TestAppOptions {
+  /** Environment variables on top of the test defaults, e.g. { AUTH_RATE_LIMIT: '3' }. */
+  env?: Record<string, string>;
+  /** Changes to the parsed config (applied last). */
+  config?: Partial<Config>;
+  /** Other createApp dependencies (e.g. clientDir). */
+  deps?: Partial<Omit<AppDeps, 'db' | 'config'>>;
+}
+
+/** Builds the app on a new temporary database file, migrated to the latest level. */
+export async function createTestApp(options: TestAppOptions = {}): Promise<TestApp> {
+  const dir = mkdtempSync(join(tmpdir(), 'latchet-test-'));
+  const file = join(dir, 'test.sqlite3');
+  const config = { ...loadConfig({ NODE_ENV: 'test', DATABASE_FILE: file, PORT: '0', ...options.env }), ...options.config };
+  const db = openDb(file);
+  await migrateLatest(db);
+  const errors: unknown[] = [];
+  const app = createApp({ db, config, log: (e) => errors.push(e), ...options.deps });
+  return {
+    app,
+    db,
+    config,
+    async close() {
+      await db.destroy();
+      rmSync(dir, { recursive: true, force: true });
+    },
+  };
+}
