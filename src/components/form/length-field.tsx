@@ -1,0 +1,58 @@
+import { useEffect, useState, type ReactNode } from 'react';
+import { useController, type Control, type FieldPath, type FieldValues } from 'react-hook-form';
+import type { LengthUnit } from '@shared/units/length.ts';
+import { TextField } from '@/components/ui/field.tsx';
+import { lengthToText, textMatches, textToLengthMm } from './length-text.ts';
+
+export interface LengthFieldProps<T extends FieldValues> {
+  control: Control<T>;
+  /** Path of a number field holding millimetres. */
+  name: FieldPath<T>;
+  label: ReactNode;
+  /** The unit the maker reads and types in; the stored value is always mm. */
+  unit: LengthUnit;
+  hint?: ReactNode;
+  disabled?: boolean;
+  wrapperClassName?: string;
+}
+
+/**
+ * A length input over a mm field: shows and accepts the spec's display unit (fractions
+ * such as "1 3/16" for inches), writes mm into the form, and shows the schema's message.
+ */
+export function LengthField<T extends FieldValues>({ control, name, label, unit, hint, disabled, wrapperClassName }: LengthFieldProps<T>) {
+  const { field, fieldState } = useController({ control, name });
+  const mm = field.value as number | undefined;
+  const [text, setText] = useState(() => lengthToText(mm, unit));
+
+  // A preset, a reload or a unit change rewrites the value from outside: follow it, but never
+  // rewrite the text while it still means the same length in the current unit (the maker may
+  // be mid-fraction). A bare "13" read in the new unit no longer matches, so it reformats.
+  useEffect(() => {
+    setText((current) => (textMatches(current, mm, unit) ? current : lengthToText(mm, unit)));
+  }, [mm, unit]);
+
+  return (
+    <TextField
+      label={label}
+      unit={unit}
+      hint={hint}
+      error={fieldState.error?.message}
+      name={field.name}
+      ref={field.ref}
+      value={text}
+      disabled={disabled}
+      inputMode="decimal"
+      autoComplete="off"
+      wrapperClassName={wrapperClassName}
+      onChange={(e) => {
+        setText(e.target.value);
+        field.onChange(textToLengthMm(e.target.value, unit));
+      }}
+      onBlur={() => {
+        field.onBlur();
+        if (Number.isFinite(mm)) setText(lengthToText(mm, unit));
+      }}
+    />
+  );
+}
