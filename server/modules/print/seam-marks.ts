@@ -1,0 +1,37 @@
+import type { PlannedPage, Seam } from './page-plan.ts';
+import { textMm } from './pdf-text.ts';
+import { mmToPt } from './units.ts';
+
+/** Colour of join marks: distinct from the black pattern lines, still dark in greyscale. */
+export const SEAM_COLOR = '#b0006a';
+
+function diamond(doc: PDFKit.PDFDocument, xMm: number, yMm: number, rMm: number): void {
+  const x = mmToPt(xMm);
+  const y = mmToPt(yMm);
+  const r = mmToPt(rMm);
+  doc.moveTo(x, y - r).lineTo(x + r, y).lineTo(x, y + r).lineTo(x - r, y).closePath().fill(SEAM_COLOR);
+}
+
+/**
+ * Draws a seam's join marks on one sheet: for every row of the run, a line through the row
+ * at the seam's datum distance with a diamond and the seam letter at both ends. The same
+ * datum distance is drawn on both sheets, so the marks meet when the sheets overlap right.
+ */
+export function drawSeamMarks(doc: PDFKit.PDFDocument, page: PlannedPage, seam: Seam, side: 'left' | 'right'): void {
+  doc.save();
+  for (const pl of page.placements) {
+    const x = seam.markXMm + pl.offsetXMm;
+    const top = pl.clip.minY + 1.2;
+    const bottom = pl.clip.maxY - 1.2;
+    doc.lineWidth(mmToPt(0.2)).strokeColor(SEAM_COLOR).dash(mmToPt(1.5), { space: mmToPt(1) });
+    doc.moveTo(mmToPt(x), mmToPt(top)).lineTo(mmToPt(x), mmToPt(bottom)).stroke();
+    doc.undash();
+    diamond(doc, x, top, 1.2);
+    diamond(doc, x, bottom, 1.2);
+    const dx = side === 'right' ? -1.8 : 1.8;
+    const anchor = side === 'right' ? 'end' : 'start';
+    textMm(doc, seam.letter, x + dx, top + 1, { capMm: 2.4, weight: 'bold', color: SEAM_COLOR, anchor });
+    textMm(doc, seam.letter, x + dx, bottom + 1, { capMm: 2.4, weight: 'bold', color: SEAM_COLOR, anchor });
+  }
+  doc.restore();
+}

@@ -1,0 +1,108 @@
+import { LAYERS, type Drawing, type DrawingPiece } from '@shared/render/drawing.ts';
+import { drawCalibration, SQUARE_BLOCK_MM } from './calibration.ts';
+import { cautionKind, cautionLine } from './cautions.ts';
+import { drawDatumRuler } from './datum-ruler.ts';
+import { fmtLength } from './format-length.ts';
+import { drawJobSheet, type JobSheet } from './job-sheet.ts';
+import { ROW, type PlanPiece } from './pack.ts';
+import { drawPagePlace } from './page-place.ts';
+import { planPages, type PagePlan, type PlannedPage } from './page-plan.ts';
+import { addPageMm, createDoc, finishDoc } from './pdf-doc.ts';
+import { drawPlacement } from './pdf-draw.ts';
+import { textMm } from './pdf-text.ts';
+import type { PrintOptions } from './print-options.ts';
+import { drawSeamMarks } from './seam-marks.ts';
+import { drawTitleBlock, TITLE_BLOCK_MM } from './title-block.ts';
+
+/** What a template PDF is built from. */
+export interface TemplateInput {
+  drawing: Drawing;
+  options: PrintOptions;
+  /** The job sheet appended when options.jobSheet is set (see jobSheetFromLayout). */
+  jobSheet?: JobSheet;
+  /** Revision date: becomes the PDF's fixed CreationDate/ModDate. */
+  date?: Date;
+  /** Piece kind for the cautions ("collar", "leash", ...); guessed from the title if absent. */
+  kind?: string;
+  /** Called after each page is drawn (done, total), for progress on long runs. */
+  onProgress?: (done: number, total: number) => void;
+}
+
+/** Clear space kept round each piece's bounds, mm, so strokes on the extent are not clipped. */
+export const PIECE_PAD_MM = 2;
+
+/** The planner's view of a Drawing's pieces (bounds padded by {@link PIECE_PAD_MM}). */
+export function planPieces(drawing: Drawing): PlanPiece[] {
+  const pad = PIECE_PAD_MM;
+  return drawing.pieces.map((p, index) => ({
+    index,
+    id: p.id,
+    name: p.name,
+    lengthMm: p.lengthMm,
+    bounds: { minX: p.bounds.minX - pad, maxX: p.bounds.maxX + pad, minY: p.bounds.minY - pad, maxY: p.bounds.maxY + pad },
+  }));
+}
+
+/** Lays the drawing out on sheets per the options (exported so tests can check the tiling). */
+export function planTemplate(drawing: Drawing, options: PrintOptions): PagePlan {
+  return planPages(planPieces(drawing), options.sheet, options.orientation, options.marginMm, options.overlapMm);
+}
+
+function caption(doc: PDFKit.PDFDocument, piece: DrawingPiece, page: PlannedPage, plan: PagePlan, drawing: Drawing): void {
+  for (const pl of page.placements) {
+    if (drawing.pieces[pl.pieceIndex] !== piece) continue;
+    const parts = [piece.name, `blank ${fmtLength(piece.lengthMm, drawing.title.units)}`];
+    if (pl.tile && pl.tile.count > 1) parts.push(`part ${pl.tile.index + 1} of ${pl.tile.count}`);
+    const x = pl.clip.minX + (page.seamLeft ? plan.overlapMm + 2 : 0);
+    const maxWidthMm = Math.max(20, pl.clip.maxX - x - (page.seamRight ? plan.overlapMm + 2 : 0));
+    textMm(doc, parts.join(' · '), x, pl.clip.minY + ROW.captionMm - 1.6, { capMm: 2.2, weight: 'bold', maxWidthMm });
+  }
+}
+
+function drawPage(doc: PDFKit.PDFDocument, input: TemplateInput, plan: PagePlan, page: PlannedPage, caution: string): void {
+  const { drawing } = input;
+  const f = plan.frame;
+  addPageMm(doc, f.widthMm, f.heightMm);
+  for (const pl of page.placements) {
+    const piece = drawing.pieces[pl.pieceIndex];
+    if (!piece) continue;
+    caption(doc, piece, { ...page, placements: [pl] }, plan, drawing);
+    drawPlacement(doc, piece, pl, LAYERS);
+    drawDatumRuler(doc, piece, pl, drawing.title.units);
+  }
+  if (page.seamLeft) drawSeamMarks(doc, page, page.seamLeft, 'left');
+  if (page.seamRight) drawSeamMarks(doc, page, page.seamRight, 'right');
+  drawCalibration(doc, f.band);
+  const titleX = f.band.minX + SQUARE_BLOCK_MM + 2;
+  drawTitleBlock(doc, drawing.title, f.band, titleX);
+  const placeX = titleX + TITLE_BLOCK_MM + 4;
+  drawPagePlace(doc, plan, page, { ...f.band, minX: placeX });
+  textMm(doc, caution, f.caution.minX, f.caution.maxY - 0.6, { capMm: 1.5, maxWidthMm: f.caution.maxX - f.caution.minX, color: '#222222' });
+}
+
+/**
+ * Builds the true-scale template PDF: the drawing at 1:1 (points = mm x 72 / 25.4), tiled
+ * and packed per the options, with squares, title block, page place, seam marks, datum
+ * rulers and cautions on every page, and the job sheet when asked for. Same input, same bytes.
+ */
+export async function buildTemplatePdf(input: TemplateInput): Promise<Buffer> {
+  const { drawing, options } = input;
+  const plan = planTemplate(drawing, options);
+  const t = drawing.title;
+  const doc = createDoc({
+    title: [t.pattern, t.revision, t.size].filter(Boolean).join(' · '),
+    ...(input.date ? { date: input.date } : {}),
+  });
+  const caution = cautionLine(cautionKind(input.kind ?? `${t.pattern} ${drawing.pieces.map((p) => p.name).join(' ')}`));
+  const total = plan.pages.length + (options.jobSheet && input.jobSheet ? 1 : 0);
+  for (const page of plan.pages) {
+    drawPage(doc, input, plan, page, caution);
+    input.onProgress?.(page.number, total);
+  }
+  if (options.jobSheet && input.jobSheet) {
+    addPageMm(doc, options.sheet.widthMm, options.sheet.heightMm);
+    drawJobSheet(doc, input.jobSheet, t, { widthMm: options.sheet.widthMm, heightMm: options.sheet.heightMm, marginMm: options.marginMm });
+    input.onProgress?.(total, total);
+  }
+  return finishDoc(doc);
+}
