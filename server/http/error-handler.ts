@@ -17,6 +17,10 @@ function toHttpError(err: unknown): HttpError | null {
     if (bp.type === 'entity.parse.failed') return new HttpError(400, 'malformed_json', 'The request body is not valid JSON.');
     if (bp.type === 'encoding.unsupported' || bp.type === 'charset.unsupported') return new HttpError(415, 'unsupported_media_type', 'The request body encoding is not supported.');
   }
+  // Other http-errors raised by Express middleware (e.g. a missing static asset).
+  if (bp && typeof bp === 'object' && typeof bp.status === 'number' && bp.status >= 400 && bp.status < 500) {
+    return bp.status === 404 ? new HttpError(404, 'not_found', 'No such file.') : new HttpError(bp.status, 'bad_request', 'The request could not be handled.');
+  }
   return null;
 }
 
