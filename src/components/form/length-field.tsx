@@ -4,8 +4,8 @@ import type { LengthUnit } from '@shared/units/length.ts';
 import { TextField } from '@/components/ui/field.tsx';
 import { lengthToText, textMatches, textToLengthMm } from './length-text.ts';
 
-export interface LengthFieldProps<T extends FieldValues> {
-  control: Control<T>;
+export interface LengthFieldProps<T extends FieldValues, TOut = T> {
+  control: Control<T, unknown, TOut>;
   /** Path of a number field holding millimetres. */
   name: FieldPath<T>;
   label: ReactNode;
@@ -20,7 +20,7 @@ export interface LengthFieldProps<T extends FieldValues> {
  * A length input over a mm field: shows and accepts the spec's display unit (fractions
  * such as "1 3/16" for inches), writes mm into the form, and shows the schema's message.
  */
-export function LengthField<T extends FieldValues>({ control, name, label, unit, hint, disabled, wrapperClassName }: LengthFieldProps<T>) {
+export function LengthField<T extends FieldValues, TOut = T>({ control, name, label, unit, hint, disabled, wrapperClassName }: LengthFieldProps<T, TOut>) {
   const { field, fieldState } = useController({ control, name });
   const mm = field.value as number | undefined;
   const [text, setText] = useState(() => lengthToText(mm, unit));
