@@ -9,7 +9,11 @@ export const SQUARES = [
 ] as const;
 /** Gap between the squares, mm. */
 export const SQUARE_GAP_MM = 6;
-/** Ring thickness: a frame, not a filled block, so it costs little toner. */
+/**
+ * Ring thickness: a frame, not a filled block, so it costs little toner. It is painted as
+ * four plain rectangles: rasterisers (poppler's splash, printer RIPs) snap plain rectangle
+ * fills to the pixel grid cleanly, where an even-odd ring path gained a pixel at 1200 dpi.
+ */
 const RING_MM = 0.6;
 /** The instruction printed with the squares on every page. */
 export const SCALE_INSTRUCTION = 'print at 100 % / actual size; measure this square before you cut';
@@ -17,8 +21,9 @@ export const SCALE_INSTRUCTION = 'print at 100 % / actual size; measure this squ
 /** Where each square sits on the page (mm), so tests can crop around it. */
 export function squareBoxes(band: BoxMm): BoxMm[] {
   let x = band.minX;
+  const top = band.maxY - MM_PER_IN;
   return SQUARES.map((s) => {
-    const box = { minX: x, maxX: x + s.sideMm, minY: band.maxY - s.sideMm, maxY: band.maxY };
+    const box = { minX: x, maxX: x + s.sideMm, minY: top, maxY: top + s.sideMm };
     x += s.sideMm + SQUARE_GAP_MM;
     return box;
   });
@@ -41,13 +46,20 @@ export function drawCalibration(doc: PDFKit.PDFDocument, band: BoxMm): void {
     const y = mmToPt(b.minY);
     const side = mmToPt(s.sideMm);
     const t = mmToPt(RING_MM);
-    doc.rect(x, y, side, side).rect(x + t, y + t, side - 2 * t, side - 2 * t).fill('#000000', 'even-odd');
+    for (const [bx, by, bw, bh] of [
+      [x, y, side, t],
+      [x, y + side - t, side, t],
+      [x, y + t, t, side - 2 * t],
+      [x + side - t, y + t, t, side - 2 * t],
+    ] as const) {
+      doc.rect(bx, by, bw, bh).fill('#000000');
+    }
     textMm(doc, s.label, b.minX + s.sideMm / 2, b.minY + s.sideMm / 2 + 1, { capMm: 2.6, anchor: 'middle', weight: 'bold' });
     textMm(doc, 'outer edge', b.minX + s.sideMm / 2, b.minY + s.sideMm / 2 + 5, { capMm: 1.6, anchor: 'middle', color: '#444444' });
   });
-  const top = (boxes[0]?.minY ?? band.maxY) - 1.6;
+  const top = (boxes[0]?.minY ?? band.maxY) - 2;
   const width = SQUARE_BLOCK_MM - 4;
-  textMm(doc, 'measure this square before you cut', band.minX, top, { capMm: 1.9, maxWidthMm: width });
-  textMm(doc, 'print at 100 % / actual size;', band.minX, top - 3, { capMm: 1.9, weight: 'bold', maxWidthMm: width });
+  textMm(doc, 'measure this square before you cut', boxes[0]?.minX ?? band.minX, top, { capMm: 1.9, maxWidthMm: width });
+  textMm(doc, 'print at 100 % / actual size;', boxes[0]?.minX ?? band.minX, top - 3, { capMm: 1.9, weight: 'bold', maxWidthMm: width });
   doc.restore();
 }

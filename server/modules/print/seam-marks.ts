@@ -21,7 +21,8 @@ export function drawSeamMarks(doc: PDFKit.PDFDocument, page: PlannedPage, seam: 
   doc.save();
   for (const pl of page.placements) {
     const x = seam.markXMm + pl.offsetXMm;
-    const top = pl.clip.minY + 1.2;
+    // Letters sit beside the diamonds; keep their cap height inside the row (and the area).
+    const top = pl.clip.minY + 2.6;
     const bottom = pl.clip.maxY - 1.2;
     doc.lineWidth(mmToPt(0.2)).strokeColor(SEAM_COLOR).dash(mmToPt(1.5), { space: mmToPt(1) });
     doc.moveTo(mmToPt(x), mmToPt(top)).lineTo(mmToPt(x), mmToPt(bottom)).stroke();
@@ -30,7 +31,7 @@ export function drawSeamMarks(doc: PDFKit.PDFDocument, page: PlannedPage, seam: 
     diamond(doc, x, bottom, 1.2);
     const dx = side === 'right' ? -1.8 : 1.8;
     const anchor = side === 'right' ? 'end' : 'start';
-    textMm(doc, seam.letter, x + dx, top + 1, { capMm: 2.4, weight: 'bold', color: SEAM_COLOR, anchor });
+    textMm(doc, seam.letter, x + dx, top + 0.9, { capMm: 2.4, weight: 'bold', color: SEAM_COLOR, anchor });
     textMm(doc, seam.letter, x + dx, bottom + 1, { capMm: 2.4, weight: 'bold', color: SEAM_COLOR, anchor });
   }
   doc.restore();
