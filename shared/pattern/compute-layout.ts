@@ -1,0 +1,134 @@
+import type { PieceSpec, StrapSpec } from '../schemas/strap-spec.ts';
+import { BLANK_MAX_MM } from '../schemas/strap-spec.ts';
+import { formatLength } from '../units/format-length.ts';
+import { thicknessMm } from '../units/length.ts';
+import { centrelineFromInnerMm } from './bend.ts';
+import { cutList } from './cut-list.ts';
+import { checkShape } from './end-shape.ts';
+import { attachFromEndMm, placeEnd } from './end-features.ts';
+import { EngineError } from './engine-error.ts';
+import { ENGINE_VERSION } from './engine-version.ts';
+import { patternWarnings, pieceWarnings } from './checks.ts';
+import type { Feature, PatternLayout, PieceLayout, Warning } from './layout-types.ts';
+import { nearestPunch } from './punch.ts';
+import { ruleVsFit } from './rule-vs-fit.ts';
+import { layoutStitchRow } from './stitch.ts';
+import { adjustmentHolesMm, fitReport, strapBlankMm, type LoopParts } from './strap-length.ts';
+import { widthProfile } from './width-profile.ts';
+
+/** Blank length (mm) of a piece that is not the strap. */
+function otherBlankMm(spec: StrapSpec, piece: PieceSpec, t: number, field: string): number {
+  const len = piece.length;
+  if (len.kind === 'fixed') return len.blankMm;
+  if (len.kind === 'keeper') {
+    // Inside a keeper: round `layers` of the strap, 2 x (width + layers x T), plus ease; its centreline adds pi x T.
+    const innerMm = 2 * (spec.widthMm + len.layers * t) + len.easeMm;
+    return centrelineFromInnerMm(innerMm, t) + len.overlapMm;
+  }
+  throw new EngineError(`${field}.length.kind`, 'only the strap piece takes its length from the girth', 'fixed or keeper');
+}
+
+/** Lays out one piece `lengthMm` long. */
+function layoutPiece(spec: StrapSpec, piece: PieceSpec, index: number, lengthMm: number, t: number): { layout: PieceLayout; profile: ReturnType<typeof widthProfile> } {
+  const field = `pieces.${index}`;
+  if (!(lengthMm > 0) || lengthMm > BLANK_MAX_MM)
+    throw new EngineError(`${field}.length`, `blank length ${lengthMm.toFixed(1)} mm is outside 0-${BLANK_MAX_MM} mm`, `between 0 and ${BLANK_MAX_MM} mm`);
+  if (piece.start.kind === 'adjustable') throw new EngineError(`${field}.start.kind`, 'adjustment holes go at the end (tip) of a piece, not at its datum end', 'fold-over, plain or fold-back');
+  const profile = widthProfile(piece, spec.widthMm, lengthMm);
+  if (profile.x1 - profile.x0 < 0) throw new EngineError(`${field}.end.shape`, `the end shapes (${(lengthMm - (profile.x1 - profile.x0)).toFixed(1)} mm) are longer than the ${lengthMm.toFixed(1)} mm blank`, `less than ${lengthMm.toFixed(1)} mm together`);
+  checkShape(piece.start.shape, profile.startWidthMm, `${field}.start.shape`);
+  checkShape(piece.end.shape, profile.endWidthMm, `${field}.end.shape`);
+  const s = placeEnd(piece.start, 'start', lengthMm, t, spec.foldK, `${field}.start`);
+  const e = placeEnd(piece.end, 'end', lengthMm, t, spec.foldK, `${field}.end`);
+  const features: Feature[] = [...s.features, ...e.features];
+  if (piece.end.kind === 'adjustable') {
+    const h = piece.end.holes;
+    const at = adjustmentHolesMm(piece, lengthMm);
+    const startZone = attachFromEndMm(piece.start, t) * (piece.start.kind === 'plain' ? 1 : 2);
+    const first = at[0] ?? 0;
+    if (first - h.diameterMm / 2 <= startZone)
+      throw new EngineError(`${field}.end.holes.count`, `tip holes run past the buckle end: ${h.count} holes at ${h.spacingMm.toFixed(2)} mm need ${((h.count - 1) * h.spacingMm + h.firstFromTipMm).toFixed(1)} mm from the tip, ${(lengthMm - startZone).toFixed(1)} mm available`, `at most ${(lengthMm - startZone).toFixed(1)} mm of holes and tip`);
+    at.forEach((x, i) => features.push({ kind: 'adjust-hole', atMm: x, yMm: 0, diameterMm: h.diameterMm, punch: nearestPunch(h.diameterMm), layers: 1, label: i === h.nominalIndex ? 'hole (nominal)' : `hole ${i + 1}` }));
+  }
+  features.sort((a, b) => a.atMm - b.atMm || a.yMm - b.yMm);
+  for (const f of features) {
+    const half = (f.diameterMm ?? f.lengthMm ?? 0) / 2;
+    if (f.atMm - half < -1e-6 || f.atMm + half > lengthMm + 1e-6) throw new EngineError(`${field}`, `${f.label} at ${f.atMm.toFixed(1)} mm lies outside the ${lengthMm.toFixed(1)} mm blank`, `within 0-${lengthMm.toFixed(1)} mm`);
+    if (Math.abs(f.yMm) + (f.diameterMm ?? f.widthMm ?? 0) / 2 > profile.at(f.atMm) / 2 + 1e-6)
+      throw new EngineError(`${field}`, `${f.label} at ${f.atMm.toFixed(1)} mm runs off the edge of the ${profile.at(f.atMm).toFixed(1)} mm strap`, `within the width`);
+  }
+  const warnings: Warning[] = [];
+  const stitchRows = piece.stitchRows.flatMap((row, i) => {
+    const r = layoutStitchRow(row, profile, lengthMm, `${field}.stitchRows.${i}`, piece.id);
+    warnings.push(...r.warnings);
+    return r.rows;
+  });
+  const layout: PieceLayout = {
+    id: piece.id,
+    name: piece.name,
+    role: piece.role,
+    count: piece.count,
+    blankLengthMm: lengthMm,
+    widthMm: profile.maxWidthMm,
+    widthStations: profile.stations,
+    features,
+    folds: [...s.folds, ...e.folds],
+    stitchRows,
+    shapeDepthMm: { start: profile.x0, end: lengthMm - profile.x1 },
+    warnings,
+  };
+  layout.warnings.push(...pieceWarnings(spec, layout, profile, t, { slotHolder: piece.start.kind === 'fold-over' && !!piece.start.slot }));
+  return { layout, profile };
+}
+
+/**
+ * Computes the full Layout of a validated spec (see {@link parseSpec}). Pure: the spec is not
+ * changed. Lengths in mm, positions from each piece's datum. Throws {@link EngineError} on
+ * impossible geometry, naming the field and the limit.
+ */
+export function computeLayout(spec: StrapSpec): PatternLayout {
+  const t = thicknessMm(spec.thickness);
+  const strapIdx = spec.pieces.findIndex((p) => p.role === 'strap');
+  if (strapIdx < 0 || spec.pieces.filter((p) => p.role === 'strap').length > 1)
+    throw new EngineError('pieces', 'a pattern needs exactly one piece with role "strap"', 'exactly 1 strap piece');
+  const strap = spec.pieces[strapIdx]!;
+  if (strap.length.kind !== 'girth') throw new EngineError(`pieces.${strapIdx}.length.kind`, 'the strap piece takes its length from the girth', 'girth');
+  const others = new Map<number, number>();
+  spec.pieces.forEach((p, i) => i !== strapIdx && others.set(i, otherBlankMm(spec, p, t, `pieces.${i}`)));
+  let outsideMm = spec.hardware.loopExtraMm;
+  spec.pieces.forEach((p, i) => {
+    if (p.role !== 'bridge') return;
+    const L = others.get(i)!;
+    outsideMm += p.count * (L - attachFromEndMm(p.end, t) - attachFromEndMm(p.start, t));
+  });
+  const parts: LoopParts = { thicknessMm: t, outsideMm };
+  const ruleL = strapBlankMm(spec, strap, 'rule', parts, `pieces.${strapIdx}`);
+  const fitL = strapBlankMm(spec, strap, 'fit', parts, `pieces.${strapIdx}`);
+  const strapL = spec.mode === 'rule' ? ruleL : fitL;
+  const laid = spec.pieces.map((p, i) => layoutPiece(spec, p, i, i === strapIdx ? strapL : others.get(i)!, t));
+  const strapLayout = laid[strapIdx]!.layout;
+  const fit = fitReport(spec, strap, strapL, parts);
+  strapLayout.fit = fit;
+  const pieces = laid.map((l) => l.layout);
+  const keeper = pieces.find((p) => p.role === 'accessory');
+  const warnings = [...pieces.flatMap((p) => p.warnings), ...patternWarnings(spec, strapLayout, fit, laid[strapIdx]!.profile, t, keeper?.widthMm ?? 9.5)];
+  for (const p of pieces)
+    if (p.blankLengthMm > spec.maxStripMm)
+      warnings.push({ code: 'blank-longer-than-strip', pieceId: p.id, message: `${p.name}: blank ${formatLength(p.blankLengthMm, spec.units)} is longer than the usual ${formatLength(spec.maxStripMm, spec.units)} strip` });
+  const rvf = ruleVsFit(spec, strap, ruleL, fitL, parts);
+  return {
+    engineVersion: ENGINE_VERSION,
+    kind: spec.kind,
+    name: spec.name,
+    units: spec.units,
+    mode: spec.mode,
+    thicknessMm: t,
+    girthMm: spec.girthMm,
+    targetMm: spec.girthMm + spec.easeMm,
+    pieces,
+    fit,
+    ruleVsFit: rvf,
+    cutList: cutList(spec, pieces, t),
+    warnings,
+  };
+}

@@ -1,0 +1,13 @@
+/** The public engine: spec in, Layout and Drawing out. See SPEC-FORMAT.md for the spec file. */
+export { PRESET_NAMES, type PresetName, type StrapSpec } from '../schemas/strap-spec.ts';
+export { presetSpec } from './presets/index.ts';
+export { parseSpec } from './parse-spec.ts';
+export { computeLayout } from './compute-layout.ts';
+export { drawLayout, type DrawOptions } from './draw-layout.ts';
+export { gradeSizes, type SizeRunReport, type SizeRow, type SizeJoin } from './grade-sizes.ts';
+export { EngineError } from './engine-error.ts';
+export { ENGINE_VERSION } from './engine-version.ts';
+export { specFromOptions, type SpecOptions } from './spec-from-options.ts';
+export { bendAllowanceMm, innerCircumferenceMm } from './bend.ts';
+export { nearestPunch, punchDiameterMm } from './punch.ts';
+export type * from './layout-types.ts';

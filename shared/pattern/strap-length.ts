@@ -1,0 +1,72 @@
+import type { PieceSpec, StrapSpec } from '../schemas/strap-spec.ts';
+import { centrelineFromInnerMm, innerCircumferenceMm } from './bend.ts';
+import { attachFromEndMm } from './end-features.ts';
+import { EngineError } from './engine-error.ts';
+import type { FitReport } from './layout-types.ts';
+
+/** What the loop round the body holds besides the strap piece itself (mm). */
+export interface LoopParts {
+  thicknessMm: number;
+  /** Bridge pieces (bar to bar) plus the spec's fixed loop extra, mm. */
+  outsideMm: number;
+}
+
+/** Adjustment hole centres (mm from the datum, ascending) on a strap `lengthMm` long. */
+export function adjustmentHolesMm(piece: PieceSpec, lengthMm: number): number[] {
+  if (piece.end.kind !== 'adjustable') return [];
+  const { count, spacingMm, firstFromTipMm } = piece.end.holes;
+  return Array.from({ length: count }, (_, i) => lengthMm - firstFromTipMm - (count - 1 - i) * spacingMm);
+}
+
+/** Inner length (mm) of the loop for a centreline length, when the strap closes round the body. */
+function inner(spec: StrapSpec, loopMm: number, t: number): number {
+  return spec.closes ? innerCircumferenceMm(loopMm, t) : loopMm;
+}
+
+/**
+ * Blank length (mm) of the strap piece in a mode.
+ * rule: the trade's rule of thumb (`blank` = girth + allowance; `nominal-hole`: bar to nominal
+ * hole = girth + allowance; `fixed`: a stock length).
+ * fit: the nominal hole (or the far attachment) lands where the loop's inner length equals
+ * girth + ease, the loop's centreline being inner + pi x T when the strap closes.
+ */
+export function strapBlankMm(spec: StrapSpec, piece: PieceSpec, mode: 'rule' | 'fit', parts: LoopParts, field: string): number {
+  const t = parts.thicknessMm;
+  const a = attachFromEndMm(piece.start, t);
+  const adj = piece.end.kind === 'adjustable' ? piece.end.holes : null;
+  if (adj && adj.nominalIndex >= adj.count)
+    throw new EngineError(`${field}.end.holes.nominalIndex`, `nominal hole ${adj.nominalIndex} does not exist among ${adj.count} holes (counted from 0)`, `at most ${adj.count - 1}`);
+  const beyondNominal = adj ? (adj.count - 1 - adj.nominalIndex) * adj.spacingMm + adj.firstFromTipMm : attachFromEndMm(piece.end, t);
+  if (mode === 'rule') {
+    const r = spec.rule;
+    if (r.measure === 'fixed') return r.blankMm;
+    if (r.measure === 'blank') return spec.girthMm + r.allowanceMm;
+    if (!adj) throw new EngineError('rule.measure', 'rule "nominal-hole" needs a strap with adjustment holes', 'blank or fixed');
+    return a + spec.girthMm + r.allowanceMm + beyondNominal;
+  }
+  const targetMm = spec.girthMm + spec.easeMm;
+  const loopMm = spec.closes ? centrelineFromInnerMm(targetMm, t) : targetMm;
+  return a + loopMm - parts.outsideMm + beyondNominal;
+}
+
+/** The fit at each adjustment hole (or at the far attachment of a strap without holes). */
+export function fitReport(spec: StrapSpec, piece: PieceSpec, lengthMm: number, parts: LoopParts): FitReport {
+  const t = parts.thicknessMm;
+  const a = attachFromEndMm(piece.start, t);
+  const targetMm = spec.girthMm + spec.easeMm;
+  const at = piece.end.kind === 'adjustable' ? adjustmentHolesMm(piece, lengthMm) : [lengthMm - attachFromEndMm(piece.end, t)];
+  const holes = at.map((atMm) => {
+    const loopMm = atMm - a + parts.outsideMm;
+    return { atMm, loopMm, innerMm: inner(spec, loopMm, t) };
+  });
+  const nominalIndex = piece.end.kind === 'adjustable' ? piece.end.holes.nominalIndex : 0;
+  const inners = holes.map((h) => h.innerMm);
+  const nominal = holes[nominalIndex] ?? holes[0]!;
+  return {
+    holes,
+    nominalIndex,
+    rangeMm: [Math.min(...inners), Math.max(...inners)],
+    targetMm,
+    deviationMm: nominal.innerMm - targetMm,
+  };
+}

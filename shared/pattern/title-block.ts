@@ -1,0 +1,21 @@
+import type { TitleBlock } from '../render/drawing.ts';
+import type { StrapSpec } from '../schemas/strap-spec.ts';
+import { formatLength, formatMm } from '../units/format-length.ts';
+import type { PatternLayout } from './layout-types.ts';
+
+/** The title block strings, formatted in the pattern's display units. */
+export function titleBlock(layout: PatternLayout, spec: StrapSpec, opts: { revision?: string; date?: string }): TitleBlock {
+  const u = spec.units;
+  const t = spec.thickness;
+  const leather = t.unit === 'oz' ? `${t.value} oz (${formatMm(layout.thicknessMm)} mm)` : `${formatMm(t.value)} mm (${formatMm(t.value / (25.4 / 64))} oz)`;
+  return {
+    pattern: spec.name || spec.kind,
+    ...(opts.revision ? { revision: opts.revision } : {}),
+    size: `${spec.kind}, ${spec.mode} mode`,
+    girth: `${formatLength(spec.girthMm, u)}${spec.easeMm ? ` + ${formatLength(spec.easeMm, u)} ease` : ''}`,
+    width: formatLength(spec.widthMm, u),
+    leather,
+    ...(opts.date ? { date: opts.date } : {}),
+    units: u,
+  };
+}

@@ -1,0 +1,23 @@
+import type { LayerName } from './drawing.ts';
+
+/** A number as SVG text: 3 fixed decimals (0.001 mm), never "-0.000". */
+export function svgNumber(v: number): string {
+  const s = (Math.round(v * 1000) / 1000).toFixed(3);
+  return s === '-0.000' ? '0.000' : s;
+}
+
+/** Presentation attributes per layer (mm strokes; cut is the one line to follow with the knife). */
+export function layerStyle(layer: LayerName): Record<string, string> {
+  switch (layer) {
+    case 'cut':
+      return { fill: 'none', stroke: '#000000', 'stroke-width': '0.300' };
+    case 'punch':
+      return { fill: 'none', stroke: '#000000', 'stroke-width': '0.200' };
+    case 'fold':
+      return { fill: 'none', stroke: '#1f5fa8', 'stroke-width': '0.250', 'stroke-dasharray': '3.000 1.500' };
+    case 'guide':
+      return { fill: 'none', stroke: '#7a7a7a', 'stroke-width': '0.150', 'stroke-dasharray': '1.000 1.000' };
+    case 'label':
+      return { fill: '#000000', stroke: 'none', 'font-family': 'IBM Plex Sans, sans-serif' };
+  }
+}
