@@ -1,0 +1,41 @@
+import { computeLayout } from '@shared/pattern/compute-layout.ts';
+import { drawLayout } from '@shared/pattern/draw-layout.ts';
+import { EngineError } from '@shared/pattern/engine-error.ts';
+import type { PatternLayout } from '@shared/pattern/layout-types.ts';
+import { renderSvg } from '@shared/render/svg.ts';
+import { StrapSpecSchema, type StrapSpec } from '@shared/schemas/strap-spec.ts';
+
+/** A field that stops the drawing, with the schema's or the engine's sentence. */
+export interface DraftProblem {
+  field: string;
+  message: string;
+}
+
+/** What the live preview shows for the form's current values. */
+export type Draft =
+  | { status: 'drawn'; spec: StrapSpec; layout: PatternLayout; svg: string }
+  | { status: 'stopped'; problems: DraftProblem[] };
+
+/**
+ * Runs the engine in the browser: validate with the shared schema, compute the Layout, draw
+ * it, render SVG with the page's own DOM. Same code and bytes as the server's export.
+ */
+export function draftFrom(values: unknown, opts: { revision?: string; dom?: { window: unknown; document: unknown } } = {}): Draft {
+  const parsed = StrapSpecSchema.safeParse(values);
+  if (!parsed.success) {
+    return {
+      status: 'stopped',
+      problems: parsed.error.issues.slice(0, 6).map((i) => ({ field: i.path.map(String).join('.') || 'spec', message: i.message })),
+    };
+  }
+  try {
+    const layout = computeLayout(parsed.data);
+    const drawing = drawLayout(layout, parsed.data, opts.revision ? { revision: opts.revision } : {});
+    const svg = renderSvg(drawing, opts.dom ?? { window, document });
+    return { status: 'drawn', spec: parsed.data, layout, svg };
+  } catch (err) {
+    // Impossible geometry names its field and limit; anything else is a bug worth showing.
+    if (err instanceof EngineError) return { status: 'stopped', problems: [{ field: err.field, message: err.message }] };
+    return { status: 'stopped', problems: [{ field: 'spec', message: err instanceof Error ? err.message : String(err) }] };
+  }
+}

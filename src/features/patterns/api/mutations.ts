@@ -1,0 +1,74 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { CreatePatternInput, PatternWithHead, SaveRevisionInput, UpdatePatternInput } from '@shared/schemas/library.ts';
+import { api, apiRequest } from '@/lib/api-client.ts';
+import { patternKeys, type PatternDetail } from './queries.ts';
+
+function withEtag(res: { data: PatternWithHead; headers: Headers }): PatternDetail {
+  return { ...res.data, etag: res.headers.get('etag') ?? '' };
+}
+
+/** `POST /api/patterns`: a new pattern with revision 1. */
+export function useCreatePattern() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (body: CreatePatternInput) => withEtag(await apiRequest<PatternWithHead>('/api/patterns', { method: 'POST', body })),
+    onSuccess: async (created) => {
+      queryClient.setQueryData(patternKeys.detail(created.pattern.id), created);
+      await queryClient.invalidateQueries({ queryKey: patternKeys.lists() });
+    },
+  });
+}
+
+/**
+ * `POST /api/patterns/:id/revisions` with `If-Match`: the save only lands on the head it
+ * was based on. A 412 (someone else saved first) rejects with the ApiError, whose body
+ * carries the current head; the caller decides how to offer it.
+ */
+export function useSaveRevision(id: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async ({ etag, ...body }: SaveRevisionInput & { etag: string }) =>
+      withEtag(await apiRequest<PatternWithHead>(`/api/patterns/${id}/revisions`, { method: 'POST', body, headers: { 'If-Match': etag } })),
+    onSuccess: async (saved) => {
+      queryClient.setQueryData(patternKeys.detail(id), saved);
+      await queryClient.invalidateQueries({ queryKey: patternKeys.revisions(id) });
+      await queryClient.invalidateQueries({ queryKey: patternKeys.lists() });
+    },
+  });
+}
+
+/** `POST /api/patterns/:id/revisions/:n/restore`: a new head equal to revision n. */
+export function useRestoreRevision(id: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (n: number) => withEtag(await apiRequest<PatternWithHead>(`/api/patterns/${id}/revisions/${n}/restore`, { method: 'POST' })),
+    onSuccess: async (restored) => {
+      queryClient.setQueryData(patternKeys.detail(id), restored);
+      await queryClient.invalidateQueries({ queryKey: patternKeys.revisions(id) });
+      await queryClient.invalidateQueries({ queryKey: patternKeys.lists() });
+    },
+  });
+}
+
+/** `PATCH /api/patterns/:id`: name, tags, archived. */
+export function useUpdatePattern(id: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: UpdatePatternInput) => api.patch<unknown>(`/api/patterns/${id}`, body),
+    onSuccess: async () => {
+      await queryClient.invalidateQueries({ queryKey: patternKeys.detail(id), exact: true });
+      await queryClient.invalidateQueries({ queryKey: patternKeys.lists() });
+    },
+  });
+}
+
+/** `POST /api/patterns/:id/duplicate`: a new pattern from any revision. */
+export function useDuplicatePattern(id: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: { revision?: number; name?: string }) => api.post<PatternWithHead>(`/api/patterns/${id}/duplicate`, body),
+    onSuccess: async () => {
+      await queryClient.invalidateQueries({ queryKey: patternKeys.lists() });
+    },
+  });
+}
