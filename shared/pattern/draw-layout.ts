@@ -86,12 +86,19 @@ function drawPiece(spec: StrapSpec, piece: PieceLayout, withLabels: boolean): Dr
     items.push(labelLine(0, below, L, below));
     items.push(label(0, above, `datum 0 (${piece.id === 'strap' ? 'buckle end' : 'start'})`, { rotateDeg: -90 }));
     let aboveLen = textLengthMm("datum 0 (buckle end)", LABEL_SIZE_MM);
+    // Features sharing a station (the fold and its tongue slot) share one label and one dimension.
+    const stations: { atMm: number; texts: string[] }[] = [];
     for (const f of piece.features) {
-      const s = sizeLabel(f, u);
-      const d = formatLength(f.atMm, u);
-      items.push(label(f.atMm + LABEL_SIZE_MM / 2, above, s, { rotateDeg: -90 }));
-      items.push(labelLine(f.atMm, below - 1.5, f.atMm, below + 1.5));
-      items.push(label(f.atMm + LABEL_SIZE_MM / 2, below + 2.5, d, { rotateDeg: -90, anchor: 'end' }));
+      const last = stations[stations.length - 1];
+      if (last && Math.abs(last.atMm - f.atMm) < 0.05) last.texts.push(sizeLabel(f, u));
+      else stations.push({ atMm: f.atMm, texts: [sizeLabel(f, u)] });
+    }
+    for (const st of stations) {
+      const s = [...new Set(st.texts)].join(' + ');
+      const d = formatLength(st.atMm, u);
+      items.push(label(st.atMm + LABEL_SIZE_MM / 2, above, s, { rotateDeg: -90 }));
+      items.push(labelLine(st.atMm, below - 1.5, st.atMm, below + 1.5));
+      items.push(label(st.atMm + LABEL_SIZE_MM / 2, below + 2.5, d, { rotateDeg: -90, anchor: 'end' }));
       aboveLen = Math.max(aboveLen, textLengthMm(s, LABEL_SIZE_MM));
       belowLen = Math.max(belowLen, textLengthMm(d, LABEL_SIZE_MM));
     }

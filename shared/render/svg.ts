@@ -63,17 +63,17 @@ function addTitle(root: Svg, t: TitleBlock, x: number, y: number): number {
   const rows = [
     `Latchet pattern: ${t.pattern}${t.revision ? `, revision ${t.revision}` : ''}`,
     t.size ? `Size: ${t.size}` : '',
-    `Girth: ${t.girth}   Width: ${t.width}   Leather: ${t.leather}`,
+    `Girth: ${t.girth} · Width: ${t.width} · Leather: ${t.leather}`,
     t.date ? `Date: ${t.date}` : '',
     'Print at 100 % (actual size). The bars below must measure 25 mm and 1 in.',
   ].filter(Boolean);
   const h = (rows.length + 2) * TITLE_ROW_MM;
   const g = root.group().attr({ id: 'title-block', class: 'layer layer-label', ...layerStyle('label') });
-  g.element('path').attr({ d: `M${n(x)} ${n(y)}L${n(x + TITLE_W_MM)} ${n(y)}L${n(x + TITLE_W_MM)} ${n(y + h)}L${n(x)} ${n(y + h)}Z` });
+  g.element('path').attr({ fill: 'none', stroke: '#000000', 'stroke-width': '0.300', d: `M${n(x)} ${n(y)}L${n(x + TITLE_W_MM)} ${n(y)}L${n(x + TITLE_W_MM)} ${n(y + h)}L${n(x)} ${n(y + h)}Z` });
   rows.forEach((r, i) => addItem(g, { type: 'text', layer: 'label', x: x + 2, y: y + (i + 1) * TITLE_ROW_MM, text: r, sizeMm: i === 0 ? 3 : 2.5, anchor: 'start', ...(i === 0 ? { weight: 'bold' as const } : {}) }));
   const by = y + (rows.length + 1) * TITLE_ROW_MM;
-  g.element('path').attr({ class: 'scale', d: `M${n(x + 2)} ${n(by)}L${n(x + 27)} ${n(by)}M${n(x + 2)} ${n(by - 1.5)}L${n(x + 2)} ${n(by + 1.5)}M${n(x + 27)} ${n(by - 1.5)}L${n(x + 27)} ${n(by + 1.5)}` });
-  g.element('path').attr({ class: 'scale', d: `M${n(x + 40)} ${n(by)}L${n(x + 65.4)} ${n(by)}M${n(x + 40)} ${n(by - 1.5)}L${n(x + 40)} ${n(by + 1.5)}M${n(x + 65.4)} ${n(by - 1.5)}L${n(x + 65.4)} ${n(by + 1.5)}` });
+  g.element('path').attr({ class: 'scale', fill: 'none', stroke: '#000000', 'stroke-width': '0.300', d: `M${n(x + 2)} ${n(by)}L${n(x + 27)} ${n(by)}M${n(x + 2)} ${n(by - 1.5)}L${n(x + 2)} ${n(by + 1.5)}M${n(x + 27)} ${n(by - 1.5)}L${n(x + 27)} ${n(by + 1.5)}` });
+  g.element('path').attr({ class: 'scale', fill: 'none', stroke: '#000000', 'stroke-width': '0.300', d: `M${n(x + 40)} ${n(by)}L${n(x + 65.4)} ${n(by)}M${n(x + 40)} ${n(by - 1.5)}L${n(x + 40)} ${n(by + 1.5)}M${n(x + 65.4)} ${n(by - 1.5)}L${n(x + 65.4)} ${n(by + 1.5)}` });
   addItem(g, { type: 'text', layer: 'label', x: x + 29, y: by + 1, text: '25 mm', sizeMm: 2.5, anchor: 'start' });
   addItem(g, { type: 'text', layer: 'label', x: x + 67.4, y: by + 1, text: '1 in', sizeMm: 2.5, anchor: 'start' });
   return h;
