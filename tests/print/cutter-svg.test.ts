@@ -1,12 +1,12 @@
-import { JSDOM } from 'jsdom';
-
+import { Window } from 'happy-dom';
 import { describe, expect, it } from 'vitest';
 import { pathPointBox } from './svg-path.ts';
 import { buildCutterSvg, CUTTER_COLORS, HAIRLINE_MM } from '../../server/modules/print/cutter-svg.ts';
 import { collarDrawing, watchDrawing } from './fixtures.ts';
 
 function parse(svg: string): Document {
-  return new JSDOM(svg, { contentType: 'image/svg+xml' }).window.document;
+  const w = new Window();
+  return new w.DOMParser().parseFromString(svg, 'image/svg+xml') as unknown as Document;
 }
 
 describe('cutter SVG', () => {
@@ -33,7 +33,7 @@ describe('cutter SVG', () => {
     expect([...strokes].sort()).toEqual([CUTTER_COLORS.cut, CUTTER_COLORS.punch].sort());
     expect(doc.querySelector('[stroke-width]')?.getAttribute('stroke-width')).toBe(HAIRLINE_MM.toFixed(3));
     const piece = d.pieces[0]!;
-    const want = piece.items.filter((i) => (i.layer === 'cut' || i.layer === 'punch') && i.type !== 'text').length;
+    const want = piece.items.filter((i) => (i.layer === 'cut' || i.layer === 'punch') && (i.type === 'circle' || (i.type === 'path' && i.commands.at(-1)?.op === 'Z'))).length;
     expect(doc.querySelectorAll('path, circle').length).toBe(want);
     // Five adjustment holes, each a circle on the punch pass.
     expect(doc.querySelectorAll(`g[stroke="${CUTTER_COLORS.punch}"] circle`).length).toBe(5);

@@ -68,7 +68,8 @@ function markColumnsMm(g: { width: number; height: number }, dpi: number, rgb: B
       const i = (y * g.width + x) * 3;
       if ((rgb[i] ?? 0) > 140 && (rgb[i + 1] ?? 255) < 60 && (rgb[i + 2] ?? 0) > 70) n++;
     }
-    if (n > g.height * 0.25) cols.push(((x + 0.5) / dpi) * 25.4);
+    // A dashed mark line through a row is many pixels tall; text in the mark colour is a few.
+    if (n > 30) cols.push(((x + 0.5) / dpi) * 25.4);
   }
   return cols;
 }

@@ -23,6 +23,10 @@ function pathData(cmds: readonly PathCommand[], dy: number): string {
     .join(' ');
 }
 
+function isClosed(cmds: readonly PathCommand[]): boolean {
+  return cmds.length > 1 && cmds[cmds.length - 1]?.op === 'Z';
+}
+
 function pieceGroup(p: DrawingPiece, top: number): string {
   // The piece frame has its centreline at y = 0; the sheet puts the blank's top edge at `top`.
   const dy = top + p.widthMm / 2;
@@ -32,7 +36,8 @@ function pieceGroup(p: DrawingPiece, top: number): string {
     if (item.layer !== 'cut' && item.layer !== 'punch') continue;
     const out = item.layer === 'cut' ? cut : punch;
     if (item.type === 'circle') out.push(`<circle cx="${n(item.cx)}" cy="${n(item.cy + dy)}" r="${n(item.r)}"/>`);
-    else if (item.type === 'path' && item.commands.length > 0) out.push(`<path d="${pathData(item.commands, dy)}"/>`);
+    // Open paths on the punch layer are centre crosses (marks for a hand punch), not cuts.
+    else if (item.type === 'path' && isClosed(item.commands)) out.push(`<path d="${pathData(item.commands, dy)}"/>`);
   }
   const id = p.id.replace(/[^A-Za-z0-9_-]/g, '_');
   const group = (op: 'cut' | 'punch', body: string[]) =>
@@ -41,7 +46,8 @@ function pieceGroup(p: DrawingPiece, top: number): string {
 }
 
 /**
- * The cutter export: cut and punch geometry only (no labels, guides, folds), one stroke
+ * The cutter export: cut and punch geometry only (closed outlines, slots and holes; no labels,
+ * guides, folds or centre crosses), one stroke
  * colour per operation, hairline strokes, at 1:1 in mm. A one-piece drawing gives a sheet of
  * exactly the blank's size (lengthMm x widthMm); several pieces stack with a 5 mm gap.
  */

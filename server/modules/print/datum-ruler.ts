@@ -35,7 +35,7 @@ export function rulerTicks(lengthMm: number, units: 'in' | 'mm'): Tick[] {
  * and any seam can be checked against the printed distances with a real ruler.
  */
 export function drawDatumRuler(doc: PDFKit.PDFDocument, piece: DrawingPiece, pl: Placement, units: 'in' | 'mm'): void {
-  const y = pl.clip.maxY - ROW.rulerMm + 1.5;
+  const y = pl.clip.maxY - ROW.rulerMm + 1;
   doc.save();
   doc.rect(mmToPt(pl.clip.minX), mmToPt(pl.clip.minY), mmToPt(pl.clip.maxX - pl.clip.minX), mmToPt(pl.clip.maxY - pl.clip.minY)).clip();
   doc.lineWidth(mmToPt(0.15)).strokeColor('#333333').undash();
@@ -46,9 +46,9 @@ export function drawDatumRuler(doc: PDFKit.PDFDocument, piece: DrawingPiece, pl:
     if (t.atMm < pl.fromXMm - 1 || t.atMm > pl.toXMm + 1) continue;
     const x = t.atMm + pl.offsetXMm;
     doc.moveTo(mmToPt(x), mmToPt(y)).lineTo(mmToPt(x), mmToPt(y + t.lenMm)).stroke();
-    if (t.label !== undefined) textMm(doc, t.label, x, y + t.lenMm + 2.4, { capMm: 1.7, anchor: 'middle', color: '#333333' });
+    if (t.label !== undefined) textMm(doc, t.label, x, y + t.lenMm + 2.2, { capMm: 1.7, anchor: 'middle', color: '#333333' });
   }
-  const unitLabel = units === 'in' ? 'in from buckle end' : 'mm from buckle end';
-  if (pl.fromXMm <= 0) textMm(doc, unitLabel, pl.offsetXMm + 4, y + 5.4, { capMm: 1.5, color: '#555555' });
+  const unitLabel = `${units} from datum 0`;
+  if (pl.fromXMm <= 0) textMm(doc, unitLabel, pl.offsetXMm + 4, y + 5, { capMm: 1.5, color: '#555555' });
   doc.restore();
 }

@@ -12,7 +12,7 @@ export interface PlanPiece {
 }
 
 /** Row furniture around each placed piece, mm: caption above, datum ruler below. */
-export const ROW = { captionMm: 5, rulerMm: 9, gapMm: 4, colGapMm: 8 } as const;
+export const ROW = { captionMm: 4.5, rulerMm: 7.5, gapMm: 3, colGapMm: 8 } as const;
 
 /** Height a piece's row takes on the page: caption + drawing + ruler, mm. */
 export function rowHeightMm(p: PlanPiece): number {

@@ -4,11 +4,11 @@ import type { PaperSize } from './paper.ts';
 /** Heights of the page furniture under the drawing area, in mm. */
 export const FRAME = {
   /** Squares, title block, page place / assembly map. */
-  bandMm: 36,
+  bandMm: 34,
   /** The one-line cautions at the foot of the page. */
   cautionMm: 3.5,
   /** Space between the drawing area and the band. */
-  gapMm: 3,
+  gapMm: 2.5,
   /** Narrowest printable width the band's three columns fit in. */
   minPrintableWidthMm: 180,
 } as const;

@@ -41,16 +41,30 @@ export function drawAssemblyMap(doc: PDFKit.PDFDocument, plan: PagePlan, box: Bo
   if (singles.length > 0) rows.push({ pages: singles, letters: [] });
   const w = box.maxX - box.minX;
   const h = box.maxY - box.minY - 3;
-  const maxCols = Math.max(...rows.map((r) => r.pages.length));
+  const maxCells = Math.max(...rows.map((r) => r.pages.length));
   const gap = 2.6;
-  const cell = Math.min(9, (w - gap * (maxCols - 1)) / maxCols, (h - (rows.length - 1) * 1.5) / rows.length / 0.75);
+  const colGap = 5;
+  const rowGap = 1.5;
+  // Many runs: set the rows in up to three columns, whichever gives the biggest cells.
+  let best = { cols: 1, cell: 0 };
+  for (let cols = 1; cols <= Math.min(3, rows.length); cols++) {
+    const perCol = Math.ceil(rows.length / cols);
+    const colW = (w - (cols - 1) * colGap) / cols;
+    const cell = Math.min(10, (colW - gap * (maxCells - 1)) / maxCells, (h - (perCol - 1) * rowGap) / perCol / 0.75);
+    if (cell > best.cell) best = { cols, cell };
+  }
+  const { cols, cell } = best;
+  const perCol = Math.ceil(rows.length / cols);
+  const colW = (w - (cols - 1) * colGap) / cols;
   const cellH = cell * 0.75;
   doc.save();
   textMm(doc, 'how the pages join', box.minX, box.minY + 1.2, { capMm: 1.6, color: '#555555' });
   rows.forEach((row, ri) => {
-    const top = box.minY + 3 + ri * (cellH + 1.5);
+    const col = Math.floor(ri / perCol);
+    const top = box.minY + 3 + (ri % perCol) * (cellH + rowGap);
+    const left = box.minX + col * (colW + colGap);
     row.pages.forEach((n, ci) => {
-      const x = box.minX + ci * (cell + gap);
+      const x = left + ci * (cell + gap);
       doc.lineWidth(mmToPt(0.2)).strokeColor('#000000').undash();
       doc.rect(mmToPt(x), mmToPt(top), mmToPt(cell), mmToPt(cellH)).stroke();
       textMm(doc, String(n), x + cell / 2, top + cellH / 2 + 0.8, { capMm: Math.min(2, cellH * 0.4), anchor: 'middle' });

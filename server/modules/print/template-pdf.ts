@@ -28,8 +28,12 @@ export interface TemplateInput {
   onProgress?: (done: number, total: number) => void;
 }
 
-/** Clear space kept round each piece's bounds, mm, so strokes on the extent are not clipped. */
+/**
+ * Clear space kept round each piece's bounds, mm, so strokes on the extent are not clipped:
+ * more along the strap (the cut line sits on the bounds' ends), less across it (labels).
+ */
 export const PIECE_PAD_MM = 2;
+const PIECE_PAD_Y_MM = 1;
 
 /** The planner's view of a Drawing's pieces (bounds padded by {@link PIECE_PAD_MM}). */
 export function planPieces(drawing: Drawing): PlanPiece[] {
@@ -39,7 +43,7 @@ export function planPieces(drawing: Drawing): PlanPiece[] {
     id: p.id,
     name: p.name,
     lengthMm: p.lengthMm,
-    bounds: { minX: p.bounds.minX - pad, maxX: p.bounds.maxX + pad, minY: p.bounds.minY - pad, maxY: p.bounds.maxY + pad },
+    bounds: { minX: p.bounds.minX - pad, maxX: p.bounds.maxX + pad, minY: p.bounds.minY - PIECE_PAD_Y_MM, maxY: p.bounds.maxY + PIECE_PAD_Y_MM },
   }));
 }
 
