@@ -1,0 +1,70 @@
+import { describe, expect, it } from 'vitest';
+import { GIRTH_MIN_MM, StrapSpecSchema } from '../schemas/strap-spec.ts';
+import { computeLayout, EngineError, parseSpec, presetSpec, PRESET_NAMES, specFromOptions } from './index.ts';
+
+const caught = (f: () => unknown): EngineError => {
+  try {
+    f();
+  } catch (e) {
+    if (e instanceof EngineError) return e;
+    throw e;
+  }
+  throw new Error('did not throw');
+};
+
+describe('parseSpec and spec limits', () => {
+  it('when every preset is parsed, then it validates unchanged against StrapSpecSchema (the schema forms and routes use)', () => {
+    for (const n of PRESET_NAMES) expect(parseSpec(JSON.parse(JSON.stringify(presetSpec(n))))).toEqual(presetSpec(n));
+    for (const n of PRESET_NAMES) expect(StrapSpecSchema.safeParse(presetSpec(n)).success).toBe(true);
+  });
+
+  it('when the girth is below the limit, then the error names "girthMm" and the limit', () => {
+    const e = caught(() => parseSpec({ ...presetSpec('collar'), girthMm: 10 }));
+    expect(e.field).toBe('girthMm');
+    expect(e.limit).toBe(`at least ${GIRTH_MIN_MM}`);
+    expect(e.message).toContain(`${GIRTH_MIN_MM} mm`);
+  });
+
+  it('when the tip hole count is 0, then the error path is pieces.0.end.holes.count', () => {
+    const s = presetSpec('collar') as unknown as { pieces: { end: { holes: { count: number } } }[] };
+    s.pieces[0]!.end.holes.count = 0;
+    const e = caught(() => parseSpec(s));
+    expect(e.field).toBe('pieces.0.end.holes.count');
+    expect(e.limit).toBe('at least 1');
+  });
+
+  it('when a required object is missing, then the message says which field is required', () => {
+    const { hardware: _h, ...rest } = presetSpec('belt');
+    expect(caught(() => parseSpec(rest)).message).toBe('hardware is required');
+  });
+
+  it('when the nominal hole is past the last hole, then computeLayout names the field and the highest allowed index', () => {
+    const s = presetSpec('collar');
+    const end = s.pieces[0]!.end;
+    if (end.kind !== 'adjustable') throw new Error('preset changed');
+    end.holes.nominalIndex = 5;
+    const e = caught(() => computeLayout(s));
+    expect(e.field).toBe('pieces.0.end.holes.nominalIndex');
+    expect(e.limit).toBe('at most 4');
+  });
+
+  it('when the holes need more strap than there is, then the error says how much they need and how much is available', () => {
+    const s = presetSpec('collar');
+    const end = s.pieces[0]!.end;
+    if (end.kind !== 'adjustable') throw new Error('preset changed');
+    end.holes.count = 15;
+    end.holes.spacingMm = 40;
+    const e = caught(() => computeLayout(s));
+    expect(e.field).toBe('pieces.0.end.holes.count');
+    expect(e.message).toMatch(/15 holes at 40\.00 mm need 636\.2 mm from the tip, \d+\.\d mm available/);
+  });
+
+  it('when options are typed as text, then "14in", "4mm" and fit mode reach the spec in mm', () => {
+    const s = specFromOptions({ preset: 'collar', girth: '14in', thickness: '4mm', mode: 'fit' });
+    expect(s.girthMm).toBeCloseTo(355.6, 9);
+    expect(s.thickness).toEqual({ unit: 'mm', value: 4 });
+    expect(s.mode).toBe('fit');
+    expect(caught(() => specFromOptions({ preset: 'saddle' })).field).toBe('preset');
+    expect(caught(() => specFromOptions({ girth: 'thirteen' })).field).toBe('girth');
+  });
+});
