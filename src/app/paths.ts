@@ -8,6 +8,23 @@ function withRedirect(base: string, redirectTo?: string | null): string {
 
 export const paths = {
   home: { path: '/', getHref: () => '/' },
+  library: { path: '/', getHref: (search?: string) => (search ? `/?${search}` : '/') },
+  patterns: {
+    new: { path: '/patterns/new', getHref: (kind?: string) => (kind ? `/patterns/new?kind=${encodeURIComponent(kind)}` : '/patterns/new') },
+    detail: { path: '/patterns/:id', getHref: (id: number) => `/patterns/${id}` },
+    history: { path: '/patterns/:id/history', getHref: (id: number) => `/patterns/${id}/history` },
+    revision: { path: '/patterns/:id/revisions/:n', getHref: (id: number, n: number) => `/patterns/${id}/revisions/${n}` },
+    compare: {
+      path: '/patterns/:id/compare',
+      getHref: (id: number, from: number, to: number) => `/patterns/${id}/compare?from=${from}&to=${to}`,
+    },
+  },
+  shop: {
+    members: { path: '/shop/members', getHref: () => '/shop/members' },
+    mail: { path: '/dev/mail', getHref: () => '/dev/mail' },
+  },
+  invite: { path: '/invites/:token', getHref: (token: string) => `/invites/${encodeURIComponent(token)}` },
+  share: { path: '/s/:token', getHref: (token: string) => `/s/${encodeURIComponent(token)}` },
   auth: {
     signIn: { path: '/sign-in', getHref: (redirectTo?: string | null) => withRedirect('/sign-in', redirectTo) },
     signUp: { path: '/sign-up', getHref: (redirectTo?: string | null) => withRedirect('/sign-up', redirectTo) },

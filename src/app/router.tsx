@@ -49,7 +49,11 @@ export function createAppRouter(queryClient: QueryClient) {
         {
           id: 'app-layout',
           lazy: () => import('./routes/app/layout.tsx').then(load),
-          children: [{ index: true, lazy: () => import('./routes/app/workbench.tsx').then(load) }],
+          children: [
+            { index: true, lazy: () => import('./routes/app/library.tsx').then(load) },
+            { path: paths.patterns.new.path, lazy: () => import('./routes/app/new-pattern.tsx').then(load) },
+            { path: paths.patterns.detail.path, lazy: () => import('./routes/app/pattern/editor.tsx').then(load) },
+          ],
         },
         { path: '*', lazy: () => import('./routes/not-found.tsx').then(load) },
       ],

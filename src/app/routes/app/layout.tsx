@@ -1,6 +1,8 @@
 import { Suspense } from 'react';
 import { Navigate, NavLink, Outlet, useLocation, useNavigate, type LoaderFunction } from 'react-router-dom';
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
+import type { Role } from '@shared/schemas/auth.ts';
+import { can } from '@shared/schemas/permissions.ts';
 import { meQueryOptions } from '@/features/auth/api/queries.ts';
 import { useSignOut } from '@/features/auth/api/mutations.ts';
 import { RoleBadge } from '@/features/auth/components/role-badge.tsx';
@@ -21,8 +23,11 @@ interface NavItem {
   end?: boolean;
 }
 
-function navItems(): NavItem[] {
-  return [{ to: paths.home.getHref(), label: 'Workbench', end: true }];
+function navItems(role: Role): NavItem[] {
+  const items: NavItem[] = [{ to: paths.library.getHref(), label: 'Library', end: true }];
+  if (can(role, 'members.list')) items.push({ to: paths.shop.members.getHref(), label: 'Shop' });
+  if (can(role, 'devmail.read')) items.push({ to: paths.shop.mail.getHref(), label: 'Mailbox' });
+  return items;
 }
 
 /** The signed-in shell: who you are, which shop, what you may do, and the screens. */
@@ -43,7 +48,7 @@ export function Component() {
         <div className="mx-auto flex h-16 max-w-7xl items-center gap-6 px-4 sm:px-6">
           <Wordmark className="text-lg text-paper" />
           <nav aria-label="Main" className="flex items-center gap-1">
-            {navItems().map((item) => (
+            {navItems(me.role).map((item) => (
               <NavLink
                 key={item.to}
                 to={item.to}

@@ -19,6 +19,11 @@ export function useCreatePattern() {
   });
 }
 
+/** The pattern as it is now, straight from the server (bypassing the cache). */
+async function freshDetail(id: number): Promise<PatternDetail> {
+  return withEtag(await apiRequest<PatternWithHead>(`/api/patterns/${id}`));
+}
+
 /**
  * `POST /api/patterns/:id/revisions` with `If-Match`: the save only lands on the head it
  * was based on. A 412 (someone else saved first) rejects with the ApiError, whose body
@@ -27,8 +32,11 @@ export function useCreatePattern() {
 export function useSaveRevision(id: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async ({ etag, ...body }: SaveRevisionInput & { etag: string }) =>
-      withEtag(await apiRequest<PatternWithHead>(`/api/patterns/${id}/revisions`, { method: 'POST', body, headers: { 'If-Match': etag } })),
+    mutationFn: async ({ etag, ...body }: SaveRevisionInput & { etag: string }) => {
+      await apiRequest<unknown>(`/api/patterns/${id}/revisions`, { method: 'POST', body, headers: { 'If-Match': etag } });
+      // Read the new head back with its ETag: the next save must be based on exactly it.
+      return freshDetail(id);
+    },
     onSuccess: async (saved) => {
       queryClient.setQueryData(patternKeys.detail(id), saved);
       await queryClient.invalidateQueries({ queryKey: patternKeys.revisions(id) });
@@ -41,7 +49,10 @@ export function useSaveRevision(id: number) {
 export function useRestoreRevision(id: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (n: number) => withEtag(await apiRequest<PatternWithHead>(`/api/patterns/${id}/revisions/${n}/restore`, { method: 'POST' })),
+    mutationFn: async (n: number) => {
+      await apiRequest<unknown>(`/api/patterns/${id}/revisions/${n}/restore`, { method: 'POST' });
+      return freshDetail(id);
+    },
     onSuccess: async (restored) => {
       queryClient.setQueryData(patternKeys.detail(id), restored);
       await queryClient.invalidateQueries({ queryKey: patternKeys.revisions(id) });
@@ -51,6 +62,17 @@ export function useRestoreRevision(id: number) {
 }
 
 /** `PATCH /api/patterns/:id`: name, tags, archived. */
+/** Re-reads a pattern after a 412 so the editor can show what the other person saved. */
+export function useFetchLatest(id: number) {
+  const queryClient = useQueryClient();
+  return async () => {
+    const latest = await freshDetail(id);
+    queryClient.setQueryData(patternKeys.detail(id), latest);
+    await queryClient.invalidateQueries({ queryKey: patternKeys.revisions(id) });
+    return latest;
+  };
+}
+
 export function useUpdatePattern(id: number) {
   const queryClient = useQueryClient();
   return useMutation({

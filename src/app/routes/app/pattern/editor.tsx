@@ -1,0 +1,27 @@
+import { useParams, type LoaderFunction } from 'react-router-dom';
+import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
+import { can } from '@shared/schemas/permissions.ts';
+import { meQueryOptions } from '@/features/auth/api/queries.ts';
+import { patternQueryOptions } from '@/features/patterns/api/queries.ts';
+import { PatternHeader } from '@/features/patterns/components/pattern-header.tsx';
+import { PatternEditor } from '@/features/patterns/components/editor/pattern-editor.tsx';
+import { idFromParams, patternTabs } from './pattern-tabs.ts';
+
+export const clientLoader = (queryClient: QueryClient): LoaderFunction => async ({ params }) => {
+  await queryClient.ensureQueryData(patternQueryOptions(idFromParams(params.id)));
+  return null;
+};
+
+/** One pattern: its spec form beside the live preview, save, print. */
+export function Component() {
+  const id = idFromParams(useParams().id);
+  const { data: me } = useSuspenseQuery(meQueryOptions());
+  const { data: detail } = useSuspenseQuery(patternQueryOptions(id));
+  const canEdit = me ? can(me.role, 'revisions.create') : false;
+  return (
+    <div className="grid gap-6">
+      <PatternHeader pattern={detail.pattern} head={detail.head} tabs={patternTabs(id)} />
+      <PatternEditor key={id} detail={detail} canEdit={canEdit} />
+    </div>
+  );
+}

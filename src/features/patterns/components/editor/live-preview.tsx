@@ -1,0 +1,68 @@
+import { useDeferredValue, useMemo } from 'react';
+import { draftFrom } from '@/components/pattern/draft.ts';
+import { DrawingView } from '@/components/pattern/drawing-view.tsx';
+import { WarningsList } from '@/components/pattern/warnings-list.tsx';
+import { FitTable } from '@/components/pattern/fit-table.tsx';
+import { RuleVsFitPanel } from '@/components/pattern/rule-vs-fit.tsx';
+import { CutListView } from '@/components/pattern/cut-list.tsx';
+import { Notice } from '@/components/ui/notice.tsx';
+import { Panel } from '@/components/ui/panel.tsx';
+import { formatLength } from '@shared/units/format-length.ts';
+
+/**
+ * The engine run in the browser on every change of the form: drawing, warnings, the fit at
+ * each hole, rule against fit, and the cut list. Deferred so typing never waits for a draw.
+ */
+export function LivePreview({ values, revisionLabel }: { values: unknown; revisionLabel?: string }) {
+  const deferred = useDeferredValue(values);
+  const draft = useMemo(() => draftFrom(deferred, revisionLabel ? { revision: revisionLabel } : {}), [deferred, revisionLabel]);
+
+  if (draft.status === 'stopped') {
+    return (
+      <Notice tone="danger" title="The preview stopped at a value the engine cannot draw" role="status">
+        <ul className="list-disc pl-5" data-testid="draft-problems">
+          {draft.problems.map((p) => (
+            <li key={p.field + p.message}>
+              <code className="text-xs">{p.field}</code>: {p.message}
+            </li>
+          ))}
+        </ul>
+      </Notice>
+    );
+  }
+
+  const { layout } = draft;
+  const unit = layout.units;
+  const strap = layout.pieces.find((p) => p.role === 'strap');
+  return (
+    <div className="grid gap-4">
+      <Panel
+        title="Preview"
+        aside={
+          strap && (
+            <p className="text-sm tabular-nums text-hide-700" data-testid="strap-blank">
+              Strap blank <strong className="text-hide-900">{formatLength(strap.blankLengthMm, unit)}</strong> ×{' '}
+              {formatLength(strap.widthMm, unit)}
+            </p>
+          )
+        }
+      >
+        <DrawingView svg={draft.svg} label={`Drawing of ${layout.name || 'the pattern'}`} />
+      </Panel>
+      <WarningsList warnings={layout.warnings} />
+      <div className="grid gap-4 xl:grid-cols-2">
+        {layout.fit && (
+          <Panel title="Fit at each hole">
+            <FitTable fit={layout.fit} unit={unit} />
+          </Panel>
+        )}
+        <Panel title="Rule against fit">
+          <RuleVsFitPanel value={layout.ruleVsFit} mode={layout.mode} unit={unit} />
+        </Panel>
+      </div>
+      <Panel title="Cut list">
+        <CutListView list={layout.cutList} unit={unit} />
+      </Panel>
+    </div>
+  );
+}

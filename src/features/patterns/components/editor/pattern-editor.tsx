@@ -1,0 +1,114 @@
+import { useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { StrapSpecSchema, type StrapSpec, type StrapSpecInput } from '@shared/schemas/strap-spec.ts';
+import { isApiError } from '@/lib/api-client.ts';
+import { Panel } from '@/components/ui/panel.tsx';
+import { Notice } from '@/components/ui/notice.tsx';
+import { useFetchLatest, useSaveRevision } from '../../api/mutations.ts';
+import type { PatternDetail } from '../../api/queries.ts';
+import { SpecFields } from '../spec-form/spec-fields.tsx';
+import { Downloads } from './downloads.tsx';
+import { LivePreview } from './live-preview.tsx';
+import { SavePanel, type Conflict } from './save-panel.tsx';
+
+export interface PatternEditorProps {
+  detail: PatternDetail;
+  canEdit: boolean;
+}
+
+/**
+ * The pattern page's working area: the spec form beside the live preview, the save with a
+ * note (compare-and-set on the ETag the form started from), and the downloads.
+ */
+export function PatternEditor({ detail, canEdit }: PatternEditorProps) {
+  const id = detail.pattern.id;
+  const spec = detail.head.spec as StrapSpec;
+  // The revision this form started from; only a save or an explicit choice moves it.
+  const [base, setBase] = useState({ etag: detail.etag, number: detail.head.number });
+  const [conflict, setConflict] = useState<(Conflict & { detail: PatternDetail }) | null>(null);
+  const [error, setError] = useState<string>();
+  const [savedNumber, setSavedNumber] = useState<number | null>(null);
+  const save = useSaveRevision(id);
+  const fetchLatest = useFetchLatest(id);
+
+  const form = useForm<StrapSpecInput, unknown, StrapSpec>({ resolver: zodResolver(StrapSpecSchema), mode: 'onChange', defaultValues: spec });
+  const values = useWatch({ control: form.control });
+  const blocked = !StrapSpecSchema.safeParse(values).success;
+
+  const onSave = async (note: string): Promise<boolean> => {
+    setError(undefined);
+    const ok = await form.trigger();
+    if (!ok) return false;
+    try {
+      const saved = await save.mutateAsync({ spec: form.getValues() as StrapSpec, note, etag: base.etag });
+      setBase({ etag: saved.etag, number: saved.head.number });
+      form.reset(saved.head.spec as StrapSpecInput);
+      setSavedNumber(saved.head.number);
+      return true;
+    } catch (err) {
+      if (isApiError(err, 412)) {
+        const latest = await fetchLatest();
+        setConflict({ number: latest.head.number, author: latest.head.author?.name ?? null, note: latest.head.note, detail: latest });
+      } else {
+        setError(err instanceof Error ? err.message : 'The save did not go through.');
+      }
+      return false;
+    }
+  };
+
+  return (
+    <div className="grid items-start gap-6 lg:grid-cols-[minmax(320px,420px)_minmax(0,1fr)]">
+      <div className="grid gap-4 lg:sticky lg:top-4">
+        {!canEdit && (
+          <Notice tone="info" role="note">
+            Your role can read and print this pattern. A maker or the owner changes it.
+          </Notice>
+        )}
+        <form aria-label="Pattern spec" onSubmit={(e) => e.preventDefault()} noValidate>
+          <fieldset disabled={!canEdit} className="contents">
+            <SpecFields control={form.control} setValue={form.setValue} disabled={!canEdit} />
+          </fieldset>
+        </form>
+      </div>
+      <div className="grid gap-4">
+        <LivePreview values={values} revisionLabel={String(base.number)} />
+        <div className="grid gap-4 xl:grid-cols-2">
+          {canEdit && (
+            <Panel title="Save">
+              <SavePanel
+                dirty={form.formState.isDirty}
+                blocked={blocked}
+                saving={save.isPending}
+                baseNumber={base.number}
+                savedNumber={savedNumber}
+                error={error}
+                conflict={conflict}
+                onSave={onSave}
+                onKeepMine={() => {
+                  if (!conflict) return;
+                  setBase({ etag: conflict.detail.etag, number: conflict.number });
+                  setConflict(null);
+                }}
+                onTakeTheirs={() => {
+                  if (!conflict) return;
+                  setBase({ etag: conflict.detail.etag, number: conflict.number });
+                  form.reset(conflict.detail.head.spec as StrapSpecInput);
+                  setConflict(null);
+                }}
+              />
+            </Panel>
+          )}
+          <Panel title="Print and download">
+            <Downloads
+              base={`/api/patterns/${id}/revisions/${base.number}`}
+              kind={detail.pattern.kind}
+              revisionNumber={base.number}
+              dirty={form.formState.isDirty}
+            />
+          </Panel>
+        </div>
+      </div>
+    </div>
+  );
+}
