@@ -9,10 +9,16 @@ import { apiNotFound, errorHandler } from './http/error-handler.ts';
 import { originCheck } from './http/origin-check.ts';
 import { createLucia, sessionMiddleware } from './http/session.ts';
 import { serveClient } from './http/static-client.ts';
-import { createAuthRepository } from './modules/auth/auth.repository.ts';
 import { authRoutes } from './modules/auth/auth.routes.ts';
 import { createAuthService } from './modules/auth/auth.service.ts';
 import { healthRoutes } from './modules/health/health.routes.ts';
+import { createRepositories, type LibraryDeps } from './modules/library-deps.ts';
+import type { Mailbox } from './modules/mail/fake-smtp.ts';
+import { createOutbox, smtpTransport, type Outbox } from './modules/mail/outbox.ts';
+import { patternsRoutes } from './modules/patterns/patterns.routes.ts';
+import { createPatternsService } from './modules/patterns/patterns.service.ts';
+import { createRevisionsService } from './modules/revisions/revisions.service.ts';
+import type { Transporter } from 'nodemailer';
 
 export interface AppDeps {
   db: Knex;
@@ -21,12 +27,24 @@ export interface AppDeps {
   clientDir?: string;
   /** Where unexpected errors are logged (default console.error). */
   log?: (err: unknown) => void;
+  /** Outgoing mail: a nodemailer transport (default from config.smtp) and, in development
+   * and tests, the fake SMTP server's mailbox shown at /dev/mail. */
+  mail?: { transport?: Transporter; mailbox?: Mailbox };
 }
+
+/** What createApp exposes beside the app (tests flush mail through it). */
+export interface AppInternals {
+  outbox: Outbox;
+  mailbox: Mailbox | undefined;
+}
+
+/** The internals of an app made by createApp. */
+export const internalsOf = (app: Express) => app.locals.latchet as AppInternals;
 
 /** Default location of the client build. */
 export const CLIENT_DIR = fileURLToPath(new URL('../dist/client', import.meta.url));
 
-export function createApp({ db, config, clientDir = CLIENT_DIR, log }: AppDeps): Express {
+export function createApp({ db, config, clientDir = CLIENT_DIR, log, mail }: AppDeps): Express {
   const app = express();
   app.set('trust proxy', config.trustProxy);
   app.disable('x-powered-by');
@@ -54,9 +72,14 @@ export function createApp({ db, config, clientDir = CLIENT_DIR, log }: AppDeps):
     }),
   );
 
-  const authRepo = createAuthRepository(db);
+  const repos = createRepositories(db);
+  const authRepo = repos.auth;
   const lucia = createLucia(authRepo, config);
   const authService = createAuthService(db, authRepo, lucia);
+  const outbox = createOutbox(db, mail?.transport ?? smtpTransport(config), config.mailFrom);
+  const deps: LibraryDeps = { db, config, outbox, repos };
+  const internals: AppInternals = { outbox, mailbox: mail?.mailbox };
+  app.locals.latchet = internals;
 
   const api = express.Router();
   api.use(originCheck(config.publicOrigin));
@@ -69,6 +92,7 @@ export function createApp({ db, config, clientDir = CLIENT_DIR, log }: AppDeps):
   });
   api.use(healthRoutes(db));
   api.use(authRoutes(authService, lucia, config));
+  api.use(patternsRoutes(createPatternsService(deps), createRevisionsService(deps)));
   api.use(apiNotFound);
   app.use('/api', api);
 

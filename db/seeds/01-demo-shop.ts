@@ -16,9 +16,11 @@ export async function seed(knex: Knex): Promise<void> {
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   const now = Date.now();
   await knex.transaction(async (trx) => {
-    // Memberships and sessions go with their user/shop (ON DELETE CASCADE).
-    await trx('users').whereIn('email', DEMO_USERS.map((u) => u.email)).delete();
+    // The shop first: its patterns, revisions, invites and share links go with it (ON DELETE
+    // CASCADE), which frees the demo users (revision authors are RESTRICT); then the users,
+    // whose memberships and sessions cascade.
     await trx('shops').where({ name: DEMO_SHOP }).delete();
+    await trx('users').whereIn('email', DEMO_USERS.map((u) => u.email)).delete();
     const [shop] = await trx('shops').insert({ name: DEMO_SHOP, created_at: now }).returning<{ id: number }[]>('id');
     for (const [i, u] of DEMO_USERS.entries()) {
       const [user] = await trx('users')

@@ -3,6 +3,7 @@
 // name is the file name the CLI records in knex_migrations, so both ways agree on the level.
 import type { Knex } from 'knex';
 import * as accounts from '../../db/migrations/20261202023500_accounts.ts';
+import * as patternLibrary from '../../db/migrations/20261202041000_pattern_library.ts';
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -12,6 +13,7 @@ interface Migration {
 /** Every migration in order, keyed by its file name in db/migrations. */
 export const MIGRATIONS: ReadonlyArray<readonly [name: string, migration: Migration]> = [
   ['20261202023500_accounts.ts', accounts],
+  ['20261202041000_pattern_library.ts', patternLibrary],
 ];
 
 /** Knex `migrations.migrationSource` over {@link MIGRATIONS}. */

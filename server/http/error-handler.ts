@@ -31,6 +31,7 @@ export function errorHandler(log: (err: unknown) => void = (e) => console.error(
     const known = toHttpError(err);
     if (!known) log(err);
     const e = known ?? new HttpError(500, 'internal', 'Something went wrong on the server; nothing was saved by this request.');
+    for (const [name, value] of Object.entries(e.headers ?? {})) res.setHeader(name, value);
     res.status(e.status).json({ error: { code: e.code, message: e.message, ...(e.fields ? { fields: e.fields } : {}), ...e.details } });
   };
 }

@@ -13,6 +13,8 @@ export class HttpError extends Error {
     readonly fields?: FieldErrors,
     /** Extra members of the error body, e.g. the current head on a 412. */
     readonly details?: Record<string, unknown>,
+    /** Response headers to send with the error, e.g. the current ETag on a 412. */
+    readonly headers?: Record<string, string>,
   ) {
     super(message);
     this.name = 'HttpError';

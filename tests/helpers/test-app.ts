@@ -5,7 +5,9 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Express } from 'express';
 import type { Knex } from 'knex';
-import { createApp, type AppDeps } from '../../server/app.ts';
+import nodemailer from 'nodemailer';
+import { createApp, internalsOf, type AppDeps } from '../../server/app.ts';
+import { startFakeSmtp, type Mailbox } from '../../server/modules/mail/fake-smtp.ts';
 import { loadConfig, type Config } from '../../server/config.ts';
 import { migrateLatest, openDb } from '../../server/db/connection.ts';
 
@@ -13,6 +15,12 @@ export interface TestApp {
   app: Express;
   db: Knex;
   config: Config;
+  /** What the fake SMTP server (127.0.0.1, a free port) received from this app. */
+  mailbox: Mailbox;
+  /** Sends every queued mail now and waits for it. */
+  flushMail(): Promise<void>;
+  /** Unexpected errors the app logged (500s). */
+  errors: unknown[];
   /** Closes the database and deletes its folder. */
   close(): Promise<void>;
 }
@@ -34,12 +42,21 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
   const db = openDb(file);
   await migrateLatest(db);
   const errors: unknown[] = [];
-  const app = createApp({ db, config, log: (e) => errors.push(e), ...options.deps });
+  const smtp = await startFakeSmtp();
+  const transport = nodemailer.createTransport({ host: '127.0.0.1', port: smtp.port, secure: false, ignoreTLS: true });
+  const app = createApp({ db, config, log: (e) => errors.push(e), mail: { transport, mailbox: smtp.mailbox }, ...options.deps });
+  const { outbox } = internalsOf(app);
   return {
     app,
     db,
     config,
+    mailbox: smtp.mailbox,
+    flushMail: () => outbox.flush(),
+    errors,
     async close() {
+      await outbox.flush().catch(() => undefined);
+      transport.close();
+      await smtp.close();
       await db.destroy();
       rmSync(dir, { recursive: true, force: true });
     },

@@ -2,12 +2,15 @@
 // (dist/client) from a fresh database: for end-to-end tests in Chromium.
 import type { AddressInfo } from 'node:net';
 import type { Knex } from 'knex';
+import type { Mailbox } from '../../server/modules/mail/fake-smtp.ts';
 import { createTestApp, type TestAppOptions } from './test-app.ts';
 
 export interface TestServer {
   /** e.g. http://127.0.0.1:41234 (no trailing slash). */
   url: string;
   db: Knex;
+  /** Mail the app sent (invites, notifications); also shown at /dev/mail to a signed-in owner. */
+  mailbox: Mailbox;
   close(): Promise<void>;
 }
 
@@ -22,6 +25,7 @@ export async function startTestServer(options: TestAppOptions = {}): Promise<Tes
   return {
     url,
     db: t.db,
+    mailbox: t.mailbox,
     async close() {
       server.closeAllConnections();
       await new Promise<void>((resolve) => server.close(() => resolve()));

@@ -1,0 +1,69 @@
+/**
+ * Who may do what: the one permission table. The server's routes guard themselves with it
+ * (`allow(action)`), the API tests generate the role x route matrix from it, and the client
+ * may read it to hide buttons a role cannot use. `anonymous` marks public routes.
+ */
+import type { Role } from './auth.ts';
+
+/** Every role the table speaks of: the shop roles plus a visitor without a session. */
+export type Actor = Role | 'anonymous';
+
+const ALL: readonly Role[] = ['owner', 'maker', 'apprentice'];
+const EDIT: readonly Role[] = ['owner', 'maker'];
+const OWNER: readonly Role[] = ['owner'];
+const PUBLIC: readonly Actor[] = ['anonymous', 'owner', 'maker', 'apprentice'];
+
+/** One route: method, Express path under /api, and the actors allowed. */
+export interface RoutePermission {
+  method: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+  path: string;
+  actors: readonly Actor[];
+}
+
+/** action -> route and allowed actors. */
+export const PERMISSIONS = {
+  'patterns.list': { method: 'GET', path: '/patterns', actors: ALL },
+  'patterns.create': { method: 'POST', path: '/patterns', actors: EDIT },
+  'patterns.import': { method: 'POST', path: '/patterns/import', actors: EDIT },
+  'patterns.read': { method: 'GET', path: '/patterns/:id', actors: ALL },
+  'patterns.update': { method: 'PATCH', path: '/patterns/:id', actors: EDIT },
+  'patterns.duplicate': { method: 'POST', path: '/patterns/:id/duplicate', actors: EDIT },
+  'patterns.export': { method: 'GET', path: '/patterns/:id/export', actors: EDIT },
+  'patterns.compare': { method: 'GET', path: '/patterns/:id/compare', actors: ALL },
+  'patterns.activity': { method: 'GET', path: '/patterns/:id/activity', actors: ALL },
+  'patterns.follow': { method: 'PUT', path: '/patterns/:id/follow', actors: ALL },
+  'patterns.unfollow': { method: 'DELETE', path: '/patterns/:id/follow', actors: ALL },
+  'revisions.list': { method: 'GET', path: '/patterns/:id/revisions', actors: ALL },
+  'revisions.read': { method: 'GET', path: '/patterns/:id/revisions/:n', actors: ALL },
+  'revisions.create': { method: 'POST', path: '/patterns/:id/revisions', actors: EDIT },
+  'revisions.restore': { method: 'POST', path: '/patterns/:id/revisions/:n/restore', actors: EDIT },
+  'print.pdf': { method: 'GET', path: '/patterns/:id/revisions/:n/pdf', actors: ALL },
+  'print.svg': { method: 'GET', path: '/patterns/:id/revisions/:n/svg', actors: ALL },
+  'print.cutter': { method: 'GET', path: '/patterns/:id/revisions/:n/cutter.svg', actors: ALL },
+  'share.list': { method: 'GET', path: '/patterns/:id/shares', actors: EDIT },
+  'share.create': { method: 'POST', path: '/patterns/:id/share', actors: EDIT },
+  'share.revoke': { method: 'DELETE', path: '/share/:shareId', actors: EDIT },
+  'share.view': { method: 'GET', path: '/s/:token', actors: PUBLIC },
+  'share.pdf': { method: 'GET', path: '/s/:token/pdf', actors: PUBLIC },
+  'share.svg': { method: 'GET', path: '/s/:token/svg', actors: PUBLIC },
+  'share.cutter': { method: 'GET', path: '/s/:token/cutter.svg', actors: PUBLIC },
+  'members.list': { method: 'GET', path: '/shop/members', actors: ALL },
+  'members.update': { method: 'PATCH', path: '/shop/members/:userId', actors: OWNER },
+  'members.remove': { method: 'DELETE', path: '/shop/members/:userId', actors: OWNER },
+  'invites.list': { method: 'GET', path: '/shop/invites', actors: OWNER },
+  'invites.create': { method: 'POST', path: '/shop/invites', actors: OWNER },
+  'invites.revoke': { method: 'DELETE', path: '/shop/invites/:inviteId', actors: OWNER },
+  'invites.view': { method: 'GET', path: '/invites/:token', actors: PUBLIC },
+  'invites.accept': { method: 'POST', path: '/invites/:token/accept', actors: PUBLIC },
+  'settings.read': { method: 'GET', path: '/me/settings', actors: ALL },
+  'settings.update': { method: 'PATCH', path: '/me/settings', actors: ALL },
+  'devmail.read': { method: 'GET', path: '/dev/mail', actors: OWNER },
+} as const satisfies Record<string, RoutePermission>;
+
+/** A name in {@link PERMISSIONS}, e.g. `'revisions.create'`. */
+export type Action = keyof typeof PERMISSIONS;
+
+/** True when `actor` may perform `action` (the client hides what this denies). */
+export function can(actor: Actor, action: Action): boolean {
+  return (PERMISSIONS[action].actors as readonly Actor[]).includes(actor);
+}
