@@ -5,7 +5,7 @@ const commands: Record<string, () => Promise<{ run(argv: string[]): Promise<numb
   layout: () => import('./commands/layout.ts'),
   spec: () => import('./commands/spec.ts'),
   svg: () => import('./commands/svg.ts'),
-  // print: () => import('./commands/print.ts'),
+  print: () => import('./commands/print.ts'),
 };
 
 const [name, ...rest] = process.argv.slice(2);
