@@ -31,7 +31,8 @@ export function draftFrom(values: unknown, opts: { revision?: string; dom?: { wi
   try {
     const layout = computeLayout(parsed.data);
     const drawing = drawLayout(layout, parsed.data, opts.revision ? { revision: opts.revision } : {});
-    const svg = renderSvg(drawing, opts.dom ?? { window, document });
+    // The screen has its own header; the title block and calibration bars belong on paper.
+    const svg = renderSvg(drawing, opts.dom ?? { window, document }, { titleBlock: false });
     return { status: 'drawn', spec: parsed.data, layout, svg };
   } catch (err) {
     // Impossible geometry names its field and limit; anything else is a bug worth showing.

@@ -15,7 +15,7 @@ function signed(mm: number, unit: LengthUnit): string {
 export function FitTable({ fit, unit }: { fit: FitReport; unit: LengthUnit }) {
   return (
     <div className="overflow-x-auto">
-      <table className="w-full text-sm tabular-nums" data-testid="fit-table">
+      <table className="w-full whitespace-nowrap text-sm tabular-nums" data-testid="fit-table">
         <caption className="mb-2 text-left text-xs text-hide-600">
           Target inside length {formatLength(fit.targetMm, unit)}; range {formatLength(fit.rangeMm[0], unit)} to{' '}
           {formatLength(fit.rangeMm[1], unit)}.

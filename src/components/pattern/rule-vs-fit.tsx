@@ -9,7 +9,7 @@ function Column({ title, active, blankMm, nominalAtMm, innerMm, unit }: { title:
       <p className="text-xs font-semibold uppercase tracking-wider text-hide-600">
         {title} {active && <span className="normal-case tracking-normal text-hide-800">(in use)</span>}
       </p>
-      <dl className="mt-1 grid grid-cols-[auto_1fr] gap-x-3 text-sm tabular-nums">
+      <dl className="mt-1 grid grid-cols-[auto_1fr] gap-x-3 whitespace-nowrap text-sm tabular-nums">
         <dt className="text-hide-600">Blank</dt>
         <dd className="font-semibold">{formatLength(blankMm, unit)}</dd>
         {nominalAtMm !== undefined && (

@@ -49,8 +49,9 @@ export function useSaveRevision(id: number) {
 export function useRestoreRevision(id: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (n: number) => {
-      await apiRequest<unknown>(`/api/patterns/${id}/revisions/${n}/restore`, { method: 'POST' });
+    // The ETag of the head the maker was looking at: a restore must not bury a save they never saw.
+    mutationFn: async ({ n, etag }: { n: number; etag?: string }) => {
+      await apiRequest<unknown>(`/api/patterns/${id}/revisions/${n}/restore`, { method: 'POST', ...(etag ? { headers: { 'If-Match': etag } } : {}) });
       return freshDetail(id);
     },
     onSuccess: async (restored) => {

@@ -74,6 +74,6 @@ export const revisionsQueryOptions = (id: number) =>
 export const revisionQueryOptions = (id: number, n: number) =>
   queryOptions({
     queryKey: patternKeys.revision(id, n),
-    queryFn: ({ signal }) => api.get<RevisionView>(`/api/patterns/${id}/revisions/${n}`, signal),
+    queryFn: async ({ signal }) => (await api.get<{ revision: RevisionView }>(`/api/patterns/${id}/revisions/${n}`, signal)).revision,
     staleTime: Infinity,
   });

@@ -6,7 +6,7 @@ import { FormSection } from './form-section.tsx';
 import type { SectionProps } from './types.ts';
 
 const UNIT_OPTIONS = [
-  { value: 'in', label: 'Inches (fractions)' },
+  { value: 'in', label: 'Inches' },
   { value: 'mm', label: 'Millimetres' },
 ];
 const MODE_OPTIONS = [

