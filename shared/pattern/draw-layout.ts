@@ -50,11 +50,14 @@ function cross(x: number, y: number): DrawingItem {
   };
 }
 
-function sizeLabel(f: Feature, u: 'in' | 'mm'): string {
+function sizeLabel(f: Feature, u: 'in' | 'mm', piece: PieceLayout): string {
   if (f.kind === 'slot') return `slot ${formatLength(f.lengthMm ?? 0, u)} x ${formatLength(f.widthMm ?? 0, u)}`;
   if (f.kind === 'fold') return 'FOLD';
   const layers = f.layers && f.layers > 1 ? `, ${f.layers} layers` : f.partnerAtMm === undefined && f.kind !== 'adjust-hole' ? ', 1 layer' : '';
-  return `Ø${formatLength(f.diameterMm ?? 0, u)} ${f.punch?.size ?? ''} ${f.label.split(',')[0]}${layers}`.replace(/\s+/g, ' ').trim();
+  // Adjustment holes say what they fit, so the template itself answers "which hole for whom".
+  const fit = f.kind === 'adjust-hole' ? piece.fit?.holes.find((h) => Math.abs(h.atMm - f.atMm) < 1e-6) : undefined;
+  const fits = fit ? `, fits ${formatLength(fit.innerMm, u)}` : '';
+  return `Ø${formatLength(f.diameterMm ?? 0, u)} ${f.punch?.size ?? ''} ${f.label.split(',')[0]}${layers}${fits}`.replace(/\s+/g, ' ').trim();
 }
 
 /** Draws one piece: cut outline, slots, holes with crosses, stitch marks, folds, edge guide, labels. */
@@ -84,14 +87,15 @@ function drawPiece(spec: StrapSpec, piece: PieceLayout, withLabels: boolean): Dr
     const below = W / 2 + 4;
     let belowLen = 0;
     items.push(labelLine(0, below, L, below));
-    items.push(label(0, above, `datum 0 (${piece.id === 'strap' ? 'buckle end' : 'start'})`, { rotateDeg: -90 }));
-    let aboveLen = textLengthMm("datum 0 (buckle end)", LABEL_SIZE_MM);
+    const datum = ps.start.kind === 'fold-over' && ps.start.slot ? 'datum 0 (buckle end)' : 'datum 0';
+    items.push(label(0, above, datum, { rotateDeg: -90 }));
+    let aboveLen = textLengthMm(datum, LABEL_SIZE_MM);
     // Features sharing a station (the fold and its tongue slot) share one label and one dimension.
     const stations: { atMm: number; texts: string[] }[] = [];
     for (const f of piece.features) {
       const last = stations[stations.length - 1];
-      if (last && Math.abs(last.atMm - f.atMm) < 0.05) last.texts.push(sizeLabel(f, u));
-      else stations.push({ atMm: f.atMm, texts: [sizeLabel(f, u)] });
+      if (last && Math.abs(last.atMm - f.atMm) < 0.05) last.texts.push(sizeLabel(f, u, piece));
+      else stations.push({ atMm: f.atMm, texts: [sizeLabel(f, u, piece)] });
     }
     for (const st of stations) {
       const s = [...new Set(st.texts)].join(' + ');

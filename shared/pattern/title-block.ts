@@ -12,7 +12,7 @@ export function titleBlock(layout: PatternLayout, spec: StrapSpec, opts: { revis
     pattern: spec.name || spec.kind,
     ...(opts.revision ? { revision: opts.revision } : {}),
     size: `${spec.kind}, ${spec.mode} mode`,
-    girth: `${formatLength(spec.girthMm, u)}${spec.easeMm ? ` + ${formatLength(spec.easeMm, u)} ease` : ''}`,
+    girth: `${formatLength(spec.girthMm, u)}${spec.easeMm ? ` + ${formatLength(spec.easeMm, u)} ease` : ''}${spec.closes ? '' : ' working length'}`,
     width: formatLength(spec.widthMm, u),
     leather,
     ...(opts.date ? { date: opts.date } : {}),
