@@ -53,6 +53,8 @@ export function createAppRouter(queryClient: QueryClient) {
             { index: true, lazy: () => import('./routes/app/library.tsx').then(load) },
             { path: paths.patterns.new.path, lazy: () => import('./routes/app/new-pattern.tsx').then(load) },
             { path: paths.patterns.detail.path, lazy: () => import('./routes/app/pattern/editor.tsx').then(load) },
+            { path: paths.patterns.history.path, lazy: () => import('./routes/app/pattern/history.tsx').then(load) },
+            { path: paths.patterns.revision.path, lazy: () => import('./routes/app/pattern/revision.tsx').then(load) },
           ],
         },
         { path: '*', lazy: () => import('./routes/not-found.tsx').then(load) },
