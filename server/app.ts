@@ -19,6 +19,12 @@ import { patternsRoutes } from './modules/patterns/patterns.routes.ts';
 import { createPatternsService } from './modules/patterns/patterns.service.ts';
 import { createRevisionsService } from './modules/revisions/revisions.service.ts';
 import type { Transporter } from 'nodemailer';
+import { devMailApiRoutes, devMailPage } from './modules/dev-mail/dev-mail.routes.ts';
+import { invitesRoutes } from './modules/invites/invites.routes.ts';
+import { createInvitesService } from './modules/invites/invites.service.ts';
+import { membersRoutes } from './modules/members/members.routes.ts';
+import { createMembersService } from './modules/members/members.service.ts';
+import { settingsRoutes } from './modules/settings/settings.routes.ts';
 
 export interface AppDeps {
   db: Knex;
@@ -85,7 +91,8 @@ export function createApp({ db, config, clientDir = CLIENT_DIR, log, mail }: App
   api.use(originCheck(config.publicOrigin));
   api.use(requireJsonBody());
   api.use(express.json({ limit: config.jsonLimitBytes }));
-  api.use(sessionMiddleware(lucia, authRepo, config));
+  const session = sessionMiddleware(lucia, authRepo, config);
+  api.use(session);
   api.use((_req, res, next) => {
     res.setHeader('Cache-Control', 'no-store');
     next();
@@ -93,9 +100,16 @@ export function createApp({ db, config, clientDir = CLIENT_DIR, log, mail }: App
   api.use(healthRoutes(db));
   api.use(authRoutes(authService, lucia, config));
   api.use(patternsRoutes(createPatternsService(deps), createRevisionsService(deps)));
+  api.use(membersRoutes(createMembersService(db, repos.members, repos.audit)));
+  api.use(invitesRoutes(createInvitesService(deps, repos.invites, repos.members), { service: authService, repo: authRepo, lucia }, config));
+  api.use(settingsRoutes(repos.follows));
+  // The development mailbox exists only outside production and only with a fake SMTP server.
+  const mailbox = config.env !== 'production' ? mail?.mailbox : undefined;
+  if (mailbox) api.use(devMailApiRoutes(mailbox));
   api.use(apiNotFound);
   app.use('/api', api);
 
+  if (mailbox) app.use(originCheck(config.publicOrigin), devMailPage(mailbox, session));
   serveClient(app, clientDir);
   app.use(errorHandler(log));
   return app;

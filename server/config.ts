@@ -24,6 +24,10 @@ const EnvSchema = z.object({
   /** Failed sign-in/sign-up attempts allowed per client address and window. */
   AUTH_RATE_LIMIT: intIn('AUTH_RATE_LIMIT', 1, 10_000, 20),
   AUTH_RATE_WINDOW_MINUTES: intIn('AUTH_RATE_WINDOW_MINUTES', 1, 24 * 60, 15),
+  /** How long an invite link works. */
+  INVITE_TTL_HOURS: intIn('INVITE_TTL_HOURS', 1, 24 * 90, 24 * 7),
+  /** Largest pattern file `POST /api/patterns/import` accepts. */
+  IMPORT_LIMIT_KB: intIn('IMPORT_LIMIT_KB', 1, 51_200, 2048),
   /** JSON request bodies larger than this answer 413. */
   JSON_LIMIT_KB: intIn('JSON_LIMIT_KB', 1, 10_240, 256),
   /** Express "trust proxy": set when a reverse proxy terminates TLS in front of us. */
@@ -49,6 +53,8 @@ export interface Config {
   authRateLimit: number;
   authRateWindowMs: number;
   jsonLimitBytes: number;
+  inviteTtlMs: number;
+  importLimitBytes: number;
   trustProxy: boolean;
   smtp: { host: string | undefined; port: number; user: string | undefined; password: string | undefined; secure: boolean };
   mailFrom: string;
@@ -84,6 +90,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     authRateLimit: e.AUTH_RATE_LIMIT,
     authRateWindowMs: e.AUTH_RATE_WINDOW_MINUTES * 60_000,
     jsonLimitBytes: e.JSON_LIMIT_KB * 1024,
+    inviteTtlMs: e.INVITE_TTL_HOURS * HOUR_MS,
+    importLimitBytes: e.IMPORT_LIMIT_KB * 1024,
     trustProxy: e.TRUST_PROXY === '1' || e.TRUST_PROXY === 'true',
     smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT, user: e.SMTP_USER, password: e.SMTP_PASSWORD, secure: e.SMTP_SECURE === 'true' },
     mailFrom: e.MAIL_FROM,

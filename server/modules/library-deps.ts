@@ -4,6 +4,8 @@ import type { Config } from '../config.ts';
 import { createAuditRepository } from './audit/audit.repository.ts';
 import { createAuthRepository } from './auth/auth.repository.ts';
 import { createFollowsRepository } from './follows/follows.repository.ts';
+import { createInvitesRepository } from './invites/invites.repository.ts';
+import { createMembersRepository } from './members/members.repository.ts';
 import type { Outbox } from './mail/outbox.ts';
 import { createPatternsRepository } from './patterns/patterns.repository.ts';
 import { createRevisionsRepository } from './revisions/revisions.repository.ts';
@@ -13,6 +15,8 @@ export function createRepositories(db: Knex) {
     auth: createAuthRepository(db),
     audit: createAuditRepository(db),
     follows: createFollowsRepository(db),
+    invites: createInvitesRepository(db),
+    members: createMembersRepository(db),
     patterns: createPatternsRepository(db),
     revisions: createRevisionsRepository(db),
   };

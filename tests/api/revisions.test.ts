@@ -86,7 +86,7 @@ describe('saving a revision', () => {
     expect(numbers).toEqual([1, 2]);
     // The next save on the winner's ETag continues at 3.
     const winner = results.find((r) => r.status === 201)!;
-    await save(w.maker.cookie, winner.headers.etag, 360).expect(201);
+    await save(w.maker.cookie, String(winner.headers.etag), 360).expect(201);
     expect(await t.db('revisions').where({ pattern_id: w.collar.pattern.id }).orderBy('number').pluck('number')).toEqual([1, 2, 3]);
   });
 
@@ -100,7 +100,7 @@ describe('history', () => {
   it('when revision 1 is restored after revision 2, then revision 3 equals 1 and 1 and 2 are unchanged', async () => {
     const r2 = await request(t.app).post(`${path()}/revisions`).set('Cookie', w.maker.cookie).set('If-Match', w.collar.etag).send({ spec: collarWithGirth(340), note: 'bigger' }).expect(201);
     const before = await t.db('revisions').where({ pattern_id: w.collar.pattern.id }).orderBy('number');
-    const res = await request(t.app).post(`${path()}/revisions/1/restore`).set('Cookie', w.maker.cookie).set('If-Match', r2.headers.etag).expect(201);
+    const res = await request(t.app).post(`${path()}/revisions/1/restore`).set('Cookie', w.maker.cookie).set('If-Match', String(r2.headers.etag)).expect(201);
     expect(res.body.revision).toMatchObject({ number: 3, restoredFrom: 1, note: 'Restored from revision 1' });
     const r3 = await request(t.app).get(`${path()}/revisions/3`).set('Cookie', w.apprentice.cookie).expect(200);
     expect(r3.body.revision.spec).toEqual(w.collar.head.spec);
