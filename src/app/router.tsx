@@ -54,6 +54,7 @@ export function createAppRouter(queryClient: QueryClient) {
             { path: paths.patterns.new.path, lazy: () => import('./routes/app/new-pattern.tsx').then(load) },
             { path: paths.patterns.detail.path, lazy: () => import('./routes/app/pattern/editor.tsx').then(load) },
             { path: paths.patterns.history.path, lazy: () => import('./routes/app/pattern/history.tsx').then(load) },
+            { path: paths.shop.members.path, lazy: () => import('./routes/app/members.tsx').then(load) },
             { path: paths.patterns.revision.path, lazy: () => import('./routes/app/pattern/revision.tsx').then(load) },
           ],
         },
