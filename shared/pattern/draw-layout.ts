@@ -113,8 +113,16 @@ function drawPiece(spec: StrapSpec, piece: PieceLayout, withLabels: boolean): Dr
     const nameY = below + 2.5 + belowLen + NAME_SIZE_MM + 2;
     const name = `${piece.name}${piece.count > 1 ? ` x ${piece.count}` : ''}: ${formatLength(L, u)} x ${formatLength(W, u)}`;
     items.push(label(0, nameY, name, { sizeMm: NAME_SIZE_MM, weight: 'bold' }));
+    let lastY = nameY;
+    if (piece.stitchRows.length) {
+      const holes = piece.stitchRows.reduce((a, r) => a + r.holes.length, 0);
+      const thread = piece.stitchRows.reduce((a, r) => a + r.threadMm, 0);
+      const pitches = [...new Set(piece.stitchRows.map((r) => `${String(r.pitchMm)} mm iron at ${r.adjustedPitchMm.toFixed(2)} mm`))].join(', ');
+      lastY += LABEL_SIZE_MM + 2;
+      items.push(label(0, lastY, `Stitching: ${piece.stitchRows.length} rows, ${holes} holes, ${pitches}; thread about ${formatLength(thread, u)} (4 x seam, common practice)`));
+    }
     minY = above - aboveLen;
-    maxY = nameY + 1;
+    maxY = lastY + 1;
   }
   return {
     id: piece.id,

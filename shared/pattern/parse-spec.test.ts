@@ -68,3 +68,26 @@ describe('parseSpec and spec limits', () => {
     expect(caught(() => specFromOptions({ girth: 'thirteen' })).field).toBe('girth');
   });
 });
+
+describe('parseSpec messages', () => {
+  it('when a length is given as text, then the error says it must be a number of mm (not that it is missing)', () => {
+    const e = caught(() => parseSpec({ ...presetSpec('collar'), girthMm: '13in' }));
+    expect(e.field).toBe('girthMm');
+    expect(e.message).toBe('girth must be a number of mm');
+    expect(e.limit).toBe('a number');
+  });
+
+  it('when an end shape kind is unknown, then the field is the shape kind and the limit lists the known kinds', () => {
+    const s = presetSpec('collar') as unknown as { pieces: { end: { shape: unknown } }[] };
+    s.pieces[0]!.end.shape = { kind: 'oval' };
+    const e = caught(() => parseSpec(s));
+    expect(e.field).toBe('pieces.0.end.shape.kind');
+    expect(e.limit).toContain("'english-point'");
+  });
+
+  it('when the spec is not an object, then the error names the whole spec', () => {
+    const e = caught(() => parseSpec(42));
+    expect(e.field).toBe('(spec)');
+    expect(e.limit).toBe('an object');
+  });
+});

@@ -3,6 +3,9 @@ import type { StrapSpec } from '../schemas/strap-spec.ts';
 import { formatLength, formatMm } from '../units/format-length.ts';
 import type { PatternLayout } from './layout-types.ts';
 
+/** Warnings printed on the template; the rest are counted. */
+const MAX_WARNING_NOTES = 4;
+
 /** The title block strings, formatted in the pattern's display units. */
 export function titleBlock(layout: PatternLayout, spec: StrapSpec, opts: { revision?: string; date?: string }): TitleBlock {
   const u = spec.units;
@@ -17,5 +20,10 @@ export function titleBlock(layout: PatternLayout, spec: StrapSpec, opts: { revis
     leather,
     ...(opts.date ? { date: opts.date } : {}),
     units: u,
+    notes: [
+      layout.ruleVsFit.summary,
+      ...layout.warnings.slice(0, MAX_WARNING_NOTES).map((w) => `Warning (${w.code}): ${w.message}`),
+      ...(layout.warnings.length > MAX_WARNING_NOTES ? [`and ${layout.warnings.length - MAX_WARNING_NOTES} more warnings`] : []),
+    ],
   };
 }

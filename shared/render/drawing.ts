@@ -88,6 +88,8 @@ export interface TitleBlock {
   leather: string;
   date?: string;
   units: 'in' | 'mm';
+  /** Extra lines (rule vs fit, warnings), already formatted; renderers may print them. */
+  notes?: string[];
 }
 
 /** A whole pattern's drawing: one or more pieces plus the title block. */

@@ -59,17 +59,28 @@ function addPiece(root: Svg, piece: DrawingPiece, dx: number, dy: number): void 
   }
 }
 
-function addTitle(root: Svg, t: TitleBlock, x: number, y: number): number {
-  const rows = [
+function titleRows(t: TitleBlock): string[] {
+  return [
     `Latchet pattern: ${t.pattern}${t.revision ? `, revision ${t.revision}` : ''}`,
     t.size ? `Size: ${t.size}` : '',
     `Girth: ${t.girth} · Width: ${t.width} · Leather: ${t.leather}`,
     t.date ? `Date: ${t.date}` : '',
+    ...(t.notes ?? []),
     'Print at 100 % (actual size). The bars below must measure 25 mm and 1 in.',
   ].filter(Boolean);
+}
+
+function titleWidthMm(t: TitleBlock): number {
+  // Estimated advance 0.6 x font size per character (Plex Sans averages a little less).
+  return Math.max(TITLE_W_MM, ...titleRows(t).map((r) => [...r].length * 2.5 * 0.6 + 6));
+}
+
+function addTitle(root: Svg, t: TitleBlock, x: number, y: number): number {
+  const rows = titleRows(t);
+  const w = titleWidthMm(t);
   const h = (rows.length + 2) * TITLE_ROW_MM;
   const g = root.group().attr({ id: 'title-block', class: 'layer layer-label', ...layerStyle('label') });
-  g.element('path').attr({ fill: 'none', stroke: '#000000', 'stroke-width': '0.300', d: `M${n(x)} ${n(y)}L${n(x + TITLE_W_MM)} ${n(y)}L${n(x + TITLE_W_MM)} ${n(y + h)}L${n(x)} ${n(y + h)}Z` });
+  g.element('path').attr({ fill: 'none', stroke: '#000000', 'stroke-width': '0.300', d: `M${n(x)} ${n(y)}L${n(x + w)} ${n(y)}L${n(x + w)} ${n(y + h)}L${n(x)} ${n(y + h)}Z` });
   rows.forEach((r, i) => addItem(g, { type: 'text', layer: 'label', x: x + 2, y: y + (i + 1) * TITLE_ROW_MM, text: r, sizeMm: i === 0 ? 3 : 2.5, anchor: 'start', ...(i === 0 ? { weight: 'bold' as const } : {}) }));
   const by = y + (rows.length + 1) * TITLE_ROW_MM;
   g.element('path').attr({ class: 'scale', fill: 'none', stroke: '#000000', 'stroke-width': '0.300', d: `M${n(x + 2)} ${n(by)}L${n(x + 27)} ${n(by)}M${n(x + 2)} ${n(by - 1.5)}L${n(x + 2)} ${n(by + 1.5)}M${n(x + 27)} ${n(by - 1.5)}L${n(x + 27)} ${n(by + 1.5)}` });
@@ -108,9 +119,8 @@ export function renderSvg(drawing: Drawing, dom: SvgDom, opts: SvgOptions = {}):
     y += p.bounds.maxY - p.bounds.minY + GAP_MM;
     return at;
   });
-  const wide = Math.max(showTitle ? TITLE_W_MM : 0, ...drawing.pieces.map((p) => p.bounds.maxX - p.bounds.minX));
-  const titleRows = 5 + 2;
-  const titleH = showTitle ? titleRows * TITLE_ROW_MM : -GAP_MM;
+  const wide = Math.max(showTitle ? titleWidthMm(drawing.title) : 0, ...drawing.pieces.map((p) => p.bounds.maxX - p.bounds.minX));
+  const titleH = showTitle ? (titleRows(drawing.title).length + 2) * TITLE_ROW_MM : -GAP_MM;
   const box: BoxMm = { minX: -m, minY: -m, maxX: wide + m, maxY: y + titleH + m };
   return build(dom, box, (root) => {
     for (const p of placed) addPiece(root, p.piece, p.dx, p.dy);
