@@ -25,6 +25,9 @@ import { createInvitesService } from './modules/invites/invites.service.ts';
 import { membersRoutes } from './modules/members/members.routes.ts';
 import { createMembersService } from './modules/members/members.service.ts';
 import { settingsRoutes } from './modules/settings/settings.routes.ts';
+import { downloadsRoutes } from './modules/downloads/downloads.routes.ts';
+import { shareRoutes } from './modules/share/share.routes.ts';
+import { createShareService } from './modules/share/share.service.ts';
 
 export interface AppDeps {
   db: Knex;
@@ -99,7 +102,10 @@ export function createApp({ db, config, clientDir = CLIENT_DIR, log, mail }: App
   });
   api.use(healthRoutes(db));
   api.use(authRoutes(authService, lucia, config));
-  api.use(patternsRoutes(createPatternsService(deps), createRevisionsService(deps)));
+  const revisions = createRevisionsService(deps);
+  api.use(patternsRoutes(createPatternsService(deps), revisions));
+  api.use(downloadsRoutes(deps, revisions));
+  api.use(shareRoutes(createShareService(deps, repos.shares)));
   api.use(membersRoutes(createMembersService(db, repos.members, repos.audit)));
   api.use(invitesRoutes(createInvitesService(deps, repos.invites, repos.members), { service: authService, repo: authRepo, lucia }, config));
   api.use(settingsRoutes(repos.follows));

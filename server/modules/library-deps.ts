@@ -9,6 +9,7 @@ import { createMembersRepository } from './members/members.repository.ts';
 import type { Outbox } from './mail/outbox.ts';
 import { createPatternsRepository } from './patterns/patterns.repository.ts';
 import { createRevisionsRepository } from './revisions/revisions.repository.ts';
+import { createShareRepository } from './share/share.repository.ts';
 
 export function createRepositories(db: Knex) {
   return {
@@ -19,6 +20,7 @@ export function createRepositories(db: Knex) {
     members: createMembersRepository(db),
     patterns: createPatternsRepository(db),
     revisions: createRevisionsRepository(db),
+    shares: createShareRepository(db),
   };
 }
 export type Repositories = ReturnType<typeof createRepositories>;
