@@ -20,7 +20,8 @@ export default defineConfig({
   build: { outDir: here('./dist/client'), emptyOutDir: true },
   server: {
     port: Number(process.env.VITE_PORT ?? 5173),
-    proxy: { '/api': `http://127.0.0.1:${apiPort}`, '/s/': `http://127.0.0.1:${apiPort}` },
+    // /s/:token is a client screen (it reads /api/s/:token); /dev/mail is the server's own page.
+    proxy: { '/api': `http://127.0.0.1:${apiPort}`, '/dev/mail': `http://127.0.0.1:${apiPort}` },
   },
   test: {
     root: here('.'),

@@ -21,9 +21,10 @@ export const paths = {
   },
   shop: {
     members: { path: '/shop/members', getHref: () => '/shop/members' },
+    /** The server's own page (not a client route): link to it with a plain <a>. */
     mail: { path: '/dev/mail', getHref: () => '/dev/mail' },
   },
-  invite: { path: '/invites/:token', getHref: (token: string) => `/invites/${encodeURIComponent(token)}` },
+  invite: { path: '/invite/:token', getHref: (token: string) => `/invite/${encodeURIComponent(token)}` },
   share: { path: '/s/:token', getHref: (token: string) => `/s/${encodeURIComponent(token)}` },
   auth: {
     signIn: { path: '/sign-in', getHref: (redirectTo?: string | null) => withRedirect('/sign-in', redirectTo) },

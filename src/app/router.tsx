@@ -58,6 +58,7 @@ export function createAppRouter(queryClient: QueryClient) {
             { path: paths.patterns.revision.path, lazy: () => import('./routes/app/pattern/revision.tsx').then(load) },
           ],
         },
+        { path: paths.invite.path, lazy: () => import('./routes/invite.tsx').then(load) },
         { path: '*', lazy: () => import('./routes/not-found.tsx').then(load) },
       ],
     },

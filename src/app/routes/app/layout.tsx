@@ -1,6 +1,7 @@
 import { Suspense } from 'react';
 import { Navigate, NavLink, Outlet, useLocation, useNavigate, type LoaderFunction } from 'react-router-dom';
-import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
+import { useQuery, useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
+import { devMailQueryOptions } from '@/features/dev-mail/api/queries.ts';
 import type { Role } from '@shared/schemas/auth.ts';
 import { can } from '@shared/schemas/permissions.ts';
 import { meQueryOptions } from '@/features/auth/api/queries.ts';
@@ -26,7 +27,6 @@ interface NavItem {
 function navItems(role: Role): NavItem[] {
   const items: NavItem[] = [{ to: paths.library.getHref(), label: 'Library', end: true }];
   if (can(role, 'members.list')) items.push({ to: paths.shop.members.getHref(), label: 'Shop' });
-  if (can(role, 'devmail.read')) items.push({ to: paths.shop.mail.getHref(), label: 'Mailbox' });
   return items;
 }
 
@@ -36,6 +36,8 @@ export function Component() {
   const location = useLocation();
   const navigate = useNavigate();
   const signOut = useSignOut();
+  // The mailbox exists only where the server runs its fake SMTP server; ask before linking.
+  const mailbox = useQuery({ ...devMailQueryOptions(), enabled: me ? can(me.role, 'devmail.read') : false });
 
   if (!me) return <Navigate to={paths.auth.signIn.getHref(location.pathname + location.search)} replace />;
 
@@ -60,6 +62,11 @@ export function Component() {
                 {item.label}
               </NavLink>
             ))}
+            {mailbox.isSuccess && (
+              <a href={paths.shop.mail.getHref()} className="rounded-md px-3 py-1.5 text-sm font-medium text-hide-200 transition-colors hover:bg-hide-800 hover:text-paper">
+                Mailbox <span className="text-xs text-hide-400">(dev)</span>
+              </a>
+            )}
           </nav>
           <div className="ml-auto flex items-center gap-4">
             <div className="text-right leading-tight" data-testid="shell-identity">

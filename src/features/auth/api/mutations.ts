@@ -7,7 +7,7 @@ import { authKeys, meQueryOptions } from './queries.ts';
  * A change of who is signed in: forget every answer cached for the last person, keep the
  * new `me` the server just sent, and let the query refetch it in the background.
  */
-function useAdoptSession() {
+export function useAdoptSession() {
   const queryClient = useQueryClient();
   return async (me: MeResponse) => {
     queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== authKeys.all[0] });
