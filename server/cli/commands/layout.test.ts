@@ -32,6 +32,13 @@ describe('latchet layout | spec | svg', () => {
     expect(j.pieces).toHaveLength(1);
   }, 30_000);
 
+  it('when a pattern has several pieces, then the strap piece is at the top level and every piece is in pieces', async () => {
+    const j = JSON.parse((await run('layout', '--preset', 'watch-strap')).stdout);
+    expect(j.pieceId).toBe('long');
+    expect(j.blankLengthMm).toBe(132);
+    expect(j.pieces.map((p: { id: string }) => p.id)).toEqual(['long', 'short']);
+  }, 30_000);
+
   it('when --girth 14in --mode fit are given, then the nominal hole fits 14 in inside', async () => {
     const j = JSON.parse((await run('layout', '--preset', 'collar', '--girth', '14in', '--mode', 'fit')).stdout);
     expect(j.fit.holes[2].innerMm).toBeCloseTo(355.6, 6);

@@ -1,14 +1,15 @@
 // `latchet layout [--preset NAME] [--spec FILE.json] [--girth 13in] [--width 1in] [--thickness 10oz] [--mode rule|fit]`
-// prints the Layout as JSON. A single-piece pattern also has its piece's fields at the top level.
+// prints the Layout as JSON. The strap piece's fields (blank, width, features, folds) are also at
+// the top level, so one-piece patterns read flat; `pieces` holds every piece.
 import { computeLayout, type PatternLayout } from '@shared/pattern/index.ts';
 import { specFromArgv, withEngineErrors } from './strap-args.ts';
 
-/** The printed JSON: the layout, plus the strap piece's fields on top for single-piece patterns. */
+/** The printed JSON: the layout, with the strap piece's own fields copied to the top level. */
 export function layoutJson(layout: PatternLayout): Record<string, unknown> {
-  const only = layout.pieces.length === 1 ? layout.pieces[0] : undefined;
-  if (!only) return { ...layout };
-  const { warnings: _pieceWarnings, fit: _fit, ...piece } = only;
-  return { ...piece, ...layout, pieceId: only.id, pieces: layout.pieces };
+  const strap = layout.pieces.find((p) => p.role === 'strap') ?? layout.pieces[0];
+  if (!strap) return { ...layout };
+  const { warnings: _pieceWarnings, fit: _fit, name: _name, ...piece } = strap;
+  return { ...piece, ...layout, pieceId: strap.id, pieces: layout.pieces };
 }
 
 export async function run(argv: string[]): Promise<number> {
