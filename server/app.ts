@@ -26,6 +26,7 @@ import { membersRoutes } from './modules/members/members.routes.ts';
 import { createMembersService } from './modules/members/members.service.ts';
 import { settingsRoutes } from './modules/settings/settings.routes.ts';
 import { downloadsRoutes } from './modules/downloads/downloads.routes.ts';
+import { compareRoutes } from './modules/compare/compare.routes.ts';
 import { shareRoutes } from './modules/share/share.routes.ts';
 import { createShareService } from './modules/share/share.service.ts';
 
@@ -105,6 +106,7 @@ export function createApp({ db, config, clientDir = CLIENT_DIR, log, mail }: App
   const revisions = createRevisionsService(deps);
   api.use(patternsRoutes(createPatternsService(deps), revisions));
   api.use(downloadsRoutes(deps, revisions));
+  api.use(compareRoutes(deps));
   api.use(shareRoutes(createShareService(deps, repos.shares)));
   api.use(membersRoutes(createMembersService(db, repos.members, repos.audit)));
   api.use(invitesRoutes(createInvitesService(deps, repos.invites, repos.members), { service: authService, repo: authRepo, lucia }, config));
