@@ -30,6 +30,9 @@ const specArb: fc.Arbitrary<StrapSpec> = fc
     spacing: fc.double({ min: 3, max: 40, noNaN: true }),
     tipGap: fc.double({ min: 5, max: 150, noNaN: true }),
     shape: shapeArb,
+    taperTo: fc.option(fc.double({ min: 4, max: 60, noNaN: true }), { nil: undefined }),
+    taperFromEnd: fc.double({ min: 0, max: 400, noNaN: true }),
+    stitch: fc.option(fc.record({ pitch: fc.double({ min: 2, max: 8, noNaN: true }), offset: fc.double({ min: 1, max: 6, noNaN: true }), path: fc.constantFrom('both-edges' as const, 'around-start' as const, 'top-edge' as const) }), { nil: undefined }),
   })
   .map((r) => {
     const s = presetSpec(r.preset);
@@ -40,7 +43,9 @@ const specArb: fc.Arbitrary<StrapSpec> = fc
     s.mode = r.mode;
     s.units = r.units;
     const strap = s.pieces.find((p) => p.role === 'strap')!;
-    strap.taper = [];
+    // An optional taper from the given width at the start to `taperTo` near the end.
+    strap.taper = r.taperTo === undefined ? [] : [{ atMm: 0, from: 'start', widthMm: r.width }, { atMm: r.taperFromEnd, from: 'end', widthMm: r.taperTo }];
+    if (r.stitch) strap.stitchRows = [{ path: r.stitch.path, fromMm: 60, fromRef: 'start', toMm: 60, toRef: 'end', offsetMm: r.stitch.offset, pitchMm: r.stitch.pitch, tolerancePct: 5 }];
     if (strap.end.kind === 'adjustable') {
       strap.end.holes = { ...strap.end.holes, count: r.count, nominalIndex: r.nominal, spacingMm: r.spacing, firstFromTipMm: r.tipGap };
     }
@@ -77,7 +82,19 @@ describe('engine properties (fast-check)', () => {
             expect(f.atMm).toBeGreaterThanOrEqual(prev);
             prev = f.atMm;
           }
-          for (const row of p.stitchRows) for (const h of row.holes) expect(h.x >= 0 && h.x <= p.blankLengthMm && Number.isFinite(h.y)).toBe(true);
+          const halfAt = (x: number) => {
+            const st = p.widthStations;
+            const i = st.findIndex((s) => s.atMm >= x);
+            if (i <= 0) return st[Math.max(0, i)]!.widthMm / 2;
+            const a = st[i - 1]!, b = st[i]!;
+            return (a.widthMm + ((x - a.atMm) / (b.atMm - a.atMm || 1)) * (b.widthMm - a.widthMm)) / 2;
+          };
+          for (const row of p.stitchRows)
+            for (const h of row.holes) {
+              expect(h.x >= 0 && h.x <= p.blankLengthMm && Number.isFinite(h.y)).toBe(true);
+              // Stitch holes stay inside the (tapered) edges.
+              expect(Math.abs(h.y)).toBeLessThan(halfAt(h.x));
+            }
         }
         const fit = layout.fit!;
         for (let i = 1; i < fit.holes.length; i++) expect(fit.holes[i]!.innerMm).toBeGreaterThan(fit.holes[i - 1]!.innerMm);
