@@ -10,6 +10,7 @@ import { snap } from './support/screenshots.ts';
 
 type Server = Awaited<ReturnType<typeof startTestServer>>;
 
+const apprentice = { name: 'Ilse Park', email: 'ilse@harrowfinch.example', password: 'first awl and a pricking iron' };
 const owner = { name: 'Maren Finch', shopName: 'Harrow & Finch Leatherworks', email: 'maren@harrowfinch.example', password: 'oak-tanned bridle 1892' };
 
 async function signUp(page: Page, base: string) {
@@ -32,6 +33,9 @@ describe('the pattern library in the browser', () => {
   let browser: TestBrowser;
   let page: Page;
   let patternUrl = '';
+  let inviteUrl = '';
+  let other: TestBrowser;
+  let otherPage: Page;
 
   beforeAll(async () => {
     await ensureClientBuilt();
@@ -42,6 +46,7 @@ describe('the pattern library in the browser', () => {
   }, 180_000);
 
   afterAll(async () => {
+    await other?.close();
     await browser?.close();
     await server?.close();
   });
@@ -99,5 +104,68 @@ describe('the pattern library in the browser', () => {
     await page.getByLabel('Kind').selectOption('belt');
     await page.getByText('No pattern matches these filters.').waitFor();
     expect(patternUrl).toMatch(/\/patterns\/\d+$/);
+  });
+
+  it('when the owner invites an apprentice, then the invite is listed and its e-mail reaches the fake mailbox with a link', async () => {
+    await page.getByRole('link', { name: 'Shop' }).click();
+    await page.getByRole('heading', { name: 'People in the shop' }).waitFor();
+    await page.getByLabel('E-mail to invite').fill(apprentice.email);
+    await page.getByLabel('Role', { exact: true }).selectOption('apprentice');
+    await page.getByRole('button', { name: 'Send invite' }).click();
+    await page.getByText(`Invite sent to ${apprentice.email} as apprentice.`).waitFor();
+    await page.getByTestId('open-invites').getByText(apprentice.email).waitFor();
+    await snap(page, 'library-07-shop-invite');
+
+    // The outbox sends after the commit: reload the server's mailbox page until it arrives (bounded).
+    await page.getByRole('link', { name: /Mailbox/ }).click();
+    const link = page.locator('a[href*="/invite/"]').first();
+    for (let i = 0; i < 20 && (await link.count()) === 0; i++) {
+      await page.waitForTimeout(250);
+      await page.reload();
+    }
+    inviteUrl = (await link.getAttribute('href')) ?? '';
+    expect(inviteUrl.startsWith(server.url + '/invite/')).toBe(true);
+    await snap(page, 'library-08-dev-mailbox');
+  });
+
+  it('when the apprentice opens the link in their own browser and joins, then their shell shows the shop and the role Apprentice', async () => {
+    other = await launchBrowser();
+    otherPage = await other.context.newPage();
+    const p = otherPage;
+    await p.goto(inviteUrl);
+    await p.getByRole('heading', { name: `Join ${owner.shopName}` }).waitFor();
+    await snap(p, 'library-09-invite');
+    await p.getByLabel('Your name').fill(apprentice.name);
+    await p.getByLabel('Choose a password').fill(apprentice.password);
+    await p.getByRole('button', { name: `Join ${owner.shopName}` }).click();
+    await p.getByRole('heading', { name: 'Pattern library' }).waitFor();
+    await expect(p.getByTestId('role').textContent()).resolves.toBe('Apprentice');
+    await expect(p.getByTestId('shop-name').textContent()).resolves.toBe(owner.shopName);
+    // Apprentices read the library but cannot start patterns (permission table).
+    expect(await p.getByRole('link', { name: 'New pattern' }).count()).toBe(0);
+    await snap(p, 'library-10-apprentice-library');
+  });
+
+  it('when the apprentice opens the collar, then every spec field is read-only, there is no save, and printing is offered', async () => {
+    const p = otherPage;
+    await p.getByRole('link', { name: 'Collar for Juniper' }).click();
+    await p.getByTestId('drawing-preview').locator('svg').waitFor();
+    expect(await p.getByLabel('Girth').isDisabled()).toBe(true);
+    expect(await p.getByLabel('Strap width').isDisabled()).toBe(true);
+    expect(await p.getByRole('button', { name: /Save revision/ }).count()).toBe(0);
+    await p.getByText('Your role can read and print this pattern.').waitFor();
+    await p.getByRole('link', { name: 'Template PDF' }).waitFor();
+    // The saved head (15 in neck) is what the apprentice sees: blank = 15 + 8 = 23 in (common practice).
+    expect(await blankText(p)).toBe('23 in');
+    await snap(p, 'library-11-apprentice-read-only');
+  });
+
+  it('when the apprentice tries to save through the API anyway, then the server refuses with 403', async () => {
+    const p = otherPage;
+    const status = await p.evaluate(async (path) => {
+      const res = await fetch(path + '/revisions', { method: 'POST', headers: { 'Content-Type': 'application/json', 'If-Match': '"x"' }, body: JSON.stringify({ spec: {}, note: '' }) });
+      return res.status;
+    }, '/api' + new URL(patternUrl).pathname);
+    expect(status).toBe(403);
   });
 });
