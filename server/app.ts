@@ -27,6 +27,8 @@ import { createMembersService } from './modules/members/members.service.ts';
 import { settingsRoutes } from './modules/settings/settings.routes.ts';
 import { downloadsRoutes } from './modules/downloads/downloads.routes.ts';
 import { compareRoutes } from './modules/compare/compare.routes.ts';
+import { transferRoutes } from './modules/transfer/transfer.routes.ts';
+import { createTransferService } from './modules/transfer/transfer.service.ts';
 import { shareRoutes } from './modules/share/share.routes.ts';
 import { createShareService } from './modules/share/share.service.ts';
 
@@ -104,7 +106,10 @@ export function createApp({ db, config, clientDir = CLIENT_DIR, log, mail }: App
   api.use(healthRoutes(db));
   api.use(authRoutes(authService, lucia, config));
   const revisions = createRevisionsService(deps);
-  api.use(patternsRoutes(createPatternsService(deps), revisions));
+  const patterns = createPatternsService(deps);
+  // Import first: '/patterns/import' must not be read as '/patterns/:id'.
+  api.use(transferRoutes(createTransferService(deps), patterns, config));
+  api.use(patternsRoutes(patterns, revisions));
   api.use(downloadsRoutes(deps, revisions));
   api.use(compareRoutes(deps));
   api.use(shareRoutes(createShareService(deps, repos.shares)));

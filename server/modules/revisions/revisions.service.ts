@@ -4,7 +4,7 @@ import { ENGINE_VERSION } from '@shared/pattern/engine-version.ts';
 import type { RevisionView } from '@shared/schemas/library.ts';
 import type { StrapSpec } from '@shared/schemas/strap-spec.ts';
 import { writeTransaction } from '../../db/write-transaction.ts';
-import { HttpError, notFound } from '../../http/http-error.ts';
+import { HttpError, badInput, notFound } from '../../http/http-error.ts';
 import type { AuthContext } from '../../http/session.ts';
 import { layoutOrBadInput } from '../engine/engine-port.ts';
 import { queueRevisionMail } from '../follows/notify.ts';
@@ -99,7 +99,10 @@ export function createRevisionsService(deps: LibraryDeps) {
     save(auth: AuthContext, patternRaw: string | undefined, ifMatch: string | undefined, input: { spec: StrapSpec; note: string }): Promise<NewHead> {
       const tags = requireIfMatch(ifMatch);
       layoutOrBadInput(input.spec);
-      return append(auth, patternRaw, tags, async () => ({ spec: input.spec, note: input.note, restoredFrom: null }));
+      return append(auth, patternRaw, tags, async (_trx, p) => {
+        if (input.spec.kind !== p.kind) throw badInput({ 'spec.kind': `spec.kind must stay "${p.kind}" (duplicate the pattern to change its kind)` });
+        return { spec: input.spec, note: input.note, restoredFrom: null };
+      });
     },
 
     /** `POST /revisions/:n/restore`: a new head equal to revision n; If-Match optional. */
