@@ -16,7 +16,7 @@ function Group({ title, children }: { title: string; children: ReactNode }) {
 /** What to cut and gather before starting: blanks, hardware, fasteners, punches, thread. */
 export function CutListView({ list, unit }: { list: CutList; unit: LengthUnit }) {
   return (
-    <div className="grid gap-4 sm:grid-cols-2" data-testid="cut-list">
+    <div className="grid grid-cols-[repeat(auto-fit,minmax(12rem,1fr))] gap-4" data-testid="cut-list">
       <Group title="Blanks">
         {list.blanks.map((b) => (
           <li key={b.pieceId}>

@@ -33,7 +33,7 @@ function Column({ title, active, blankMm, nominalAtMm, innerMm, unit }: { title:
 export function RuleVsFitPanel({ value, mode, unit }: { value: RuleVsFit; mode: 'rule' | 'fit'; unit: LengthUnit }) {
   return (
     <div data-testid="rule-vs-fit">
-      <div className="grid grid-cols-2 gap-3">
+      <div className="grid grid-cols-[repeat(auto-fit,minmax(10.5rem,1fr))] gap-3">
         <Column title="Rule" active={mode === 'rule'} blankMm={value.rule.blankLengthMm} nominalAtMm={value.rule.nominalAtMm} innerMm={value.rule.nominalInnerMm} unit={unit} />
         <Column title="Fit" active={mode === 'fit'} blankMm={value.fit.blankLengthMm} nominalAtMm={value.fit.nominalAtMm} innerMm={value.fit.nominalInnerMm} unit={unit} />
       </div>

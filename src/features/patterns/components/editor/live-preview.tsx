@@ -50,19 +50,19 @@ export function LivePreview({ values, revisionLabel }: { values: unknown; revisi
         <DrawingView svg={draft.svg} label={`Drawing of ${layout.name || 'the pattern'}`} />
       </Panel>
       <WarningsList warnings={layout.warnings} />
+      {layout.fit && (
+        <Panel title="Fit at each hole">
+          <FitTable fit={layout.fit} unit={unit} />
+        </Panel>
+      )}
       <div className="grid gap-4 xl:grid-cols-2">
-        {layout.fit && (
-          <Panel title="Fit at each hole">
-            <FitTable fit={layout.fit} unit={unit} />
-          </Panel>
-        )}
         <Panel title="Rule against fit">
           <RuleVsFitPanel value={layout.ruleVsFit} mode={layout.mode} unit={unit} />
         </Panel>
+        <Panel title="Cut list">
+          <CutListView list={layout.cutList} unit={unit} />
+        </Panel>
       </div>
-      <Panel title="Cut list">
-        <CutListView list={layout.cutList} unit={unit} />
-      </Panel>
     </div>
   );
 }
