@@ -58,6 +58,14 @@ describe('printing a saved revision from its spec', () => {
     expect(pageText(path, pages)).toContain('Job sheet');
   });
 
+  it('when one revision was printed before another in the same process, then the second reads back whole (ToUnicode for every glyph, as a fresh process gives)', async () => {
+    const spec = presetSpec('collar');
+    await printRevisionInline(spec, { paper: 'letter' }, META);
+    const f = await printRevisionInline(spec, { paper: 'letter', size: 'all', jobSheet: true }, META);
+    const path = writeOut('revision-second.pdf', f.body);
+    expect(pageText(path, 1)).toMatch(/Collar, size [A-Z]+ · blank/);
+  });
+
   it('when the worker meets a size that is not in the run, then the same field error comes back', async () => {
     const spec = presetSpec('collar');
     await expect(printRevision(spec, { size: 'XXL' }, META)).rejects.toThrow(PrintOptionsError);

@@ -42,11 +42,15 @@ export function drawDatumRuler(doc: PDFKit.PDFDocument, piece: DrawingPiece, pl:
   const x0 = Math.max(0, pl.fromXMm);
   const x1 = Math.min(piece.lengthMm, pl.toXMm);
   if (x1 > x0) doc.moveTo(mmToPt(x0 + pl.offsetXMm), mmToPt(y)).lineTo(mmToPt(x1 + pl.offsetXMm), mmToPt(y)).stroke();
-  for (const t of rulerTicks(piece.lengthMm, units)) {
-    if (t.atMm < pl.fromXMm - 1 || t.atMm > pl.toXMm + 1) continue;
+  const ticks = rulerTicks(piece.lengthMm, units).filter((t) => t.atMm >= pl.fromXMm - 1 && t.atMm <= pl.toXMm + 1);
+  // All ticks in one path and one stroke: a long strap has hundreds.
+  for (const t of ticks) {
     const x = t.atMm + pl.offsetXMm;
-    doc.moveTo(mmToPt(x), mmToPt(y)).lineTo(mmToPt(x), mmToPt(y + t.lenMm)).stroke();
-    if (t.label !== undefined) textMm(doc, t.label, x, y + t.lenMm + 2.2, { capMm: 1.7, anchor: 'middle', color: '#333333' });
+    doc.moveTo(mmToPt(x), mmToPt(y)).lineTo(mmToPt(x), mmToPt(y + t.lenMm));
+  }
+  if (ticks.length > 0) doc.stroke();
+  for (const t of ticks) {
+    if (t.label !== undefined) textMm(doc, t.label, t.atMm + pl.offsetXMm, y + t.lenMm + 2.2, { capMm: 1.7, anchor: 'middle', color: '#333333' });
   }
   const unitLabel = `${units} from datum 0`;
   if (pl.fromXMm <= 0) textMm(doc, unitLabel, pl.offsetXMm + 4, y + 5, { capMm: 1.5, color: '#555555' });

@@ -11,6 +11,30 @@ export const FONT_FILES = {
 /** Font names registered in every document. */
 export const FONT = { regular: 'plex', bold: 'plex-semibold' } as const;
 
+/** The parsed font object pdfkit keeps inside its EmbeddedFont (pdfkit 0.20: `_font.font`). */
+type ParsedFont = { layout: (...args: unknown[]) => unknown; _glyphs?: Record<number, unknown> };
+
+// Parsed once per process and shared by every document: parsing Plex's tables and layout
+// lookups cost more than drawing a whole template (about 100 ms of 140 ms for the collar).
+// pdfkit still subsets per document. The font is parsed by pdfkit itself, so it is the very
+// fontkit build pdfkit uses (importing fontkit here resolved a different build under vitest).
+let parsed: { regular: ParsedFont; bold: ParsedFont } | undefined;
+function parseOnce(path: string): ParsedFont {
+  const scratch = new PDFDocument({ autoFirstPage: false });
+  scratch.registerFont('f', path);
+  scratch.font('f');
+  return (scratch as unknown as { _font: { font: ParsedFont } })._font.font;
+}
+function fonts(): { regular: ParsedFont; bold: ParsedFont } {
+  parsed ??= { regular: parseOnce(FONT_FILES.regular), bold: parseOnce(FONT_FILES.bold) };
+  // fontkit caches glyph objects with the characters of their first use; a glyph first met
+  // by another document's subsetting has none, and its ToUnicode entry (text copy, search)
+  // went missing. Each document starts with an empty glyph cache, as a freshly parsed font.
+  parsed.regular._glyphs = {};
+  parsed.bold._glyphs = {};
+  return parsed;
+}
+
 /** A date that changes nothing between runs when the caller gives none. */
 export const FIXED_DATE = new Date(Date.UTC(2000, 0, 1));
 
@@ -39,8 +63,10 @@ export function createDoc(meta: DocMeta): PDFKit.PDFDocument {
       ModDate: date,
     },
   });
-  doc.registerFont(FONT.regular, FONT_FILES.regular);
-  doc.registerFont(FONT.bold, FONT_FILES.bold);
+  const f = fonts();
+  // @types/pdfkit only lists paths and buffers; pdfkit 0.20 also takes a parsed font.
+  doc.registerFont(FONT.regular, f.regular as unknown as string);
+  doc.registerFont(FONT.bold, f.bold as unknown as string);
   return doc;
 }
 

@@ -65,6 +65,33 @@ function drawItem(doc: PDFKit.PDFDocument, item: DrawingItem, ox: number, oy: nu
   strokeLayer(doc, item.layer, item.dashed === true);
 }
 
+/** Along-strap extent of an item, mm, generous for text (used only to skip what a tile cannot show). */
+export function itemSpanX(item: DrawingItem): [number, number] {
+  if (item.type === 'circle') return [item.cx - item.r, item.cx + item.r];
+  if (item.type === 'text') {
+    // Plex advances are under 0.75 em; the em is sizeMm / 0.698. Turned text spans its height.
+    const len = item.text.length * (item.sizeMm / 0.698) * 0.75;
+    const turned = item.rotateDeg !== undefined && Math.abs(Math.abs(item.rotateDeg % 180) - 90) < 1e-6;
+    if (turned) return [item.x - item.sizeMm * 2, item.x + item.sizeMm * 2];
+    if (item.rotateDeg) return [item.x - len, item.x + len];
+    if (item.anchor === 'start') return [item.x, item.x + len];
+    if (item.anchor === 'end') return [item.x - len, item.x];
+    return [item.x - len / 2, item.x + len / 2];
+  }
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const c of item.commands) {
+    if (c.op === 'Z') continue;
+    lo = Math.min(lo, c.x);
+    hi = Math.max(hi, c.x);
+    if (c.op === 'C') {
+      lo = Math.min(lo, c.x1, c.x2);
+      hi = Math.max(hi, c.x1, c.x2);
+    }
+  }
+  return [lo, hi];
+}
+
 /**
  * Draws a piece (or the tile of it a placement shows) at 1:1, clipped to the placement's
  * row so nothing reaches the margins or the next sheet's part of the piece. Layers are
@@ -73,8 +100,14 @@ function drawItem(doc: PDFKit.PDFDocument, item: DrawingItem, ox: number, oy: nu
 export function drawPlacement(doc: PDFKit.PDFDocument, piece: DrawingPiece, pl: Placement, layerOrder: readonly LayerName[]): void {
   doc.save();
   doc.rect(mmToPt(pl.clip.minX), mmToPt(pl.clip.minY), mmToPt(pl.clip.maxX - pl.clip.minX), mmToPt(pl.clip.maxY - pl.clip.minY)).clip();
+  // Skip items wholly off this tile: the clip would hide them anyway, and a long strap's
+  // labels would otherwise be written into every sheet's content stream.
+  const visible = piece.items.filter((item) => {
+    const [lo, hi] = itemSpanX(item);
+    return hi >= pl.fromXMm - 1 && lo <= pl.toXMm + 1;
+  });
   for (const layer of layerOrder) {
-    for (const item of piece.items) if (item.layer === layer) drawItem(doc, item, pl.offsetXMm, pl.offsetYMm);
+    for (const item of visible) if (item.layer === layer) drawItem(doc, item, pl.offsetXMm, pl.offsetYMm);
   }
   doc.restore();
 }

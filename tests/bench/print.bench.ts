@@ -1,0 +1,115 @@
+// Print benchmark (`npm run bench print`): our pdfkit template PDF for the 21 in collar on
+// Letter and for a five-size collar run, against printing the same full-size SVG from
+// headless Chromium (page.pdf at scale 1) in the same run, as a ratio. It also measures a
+// 1 in check square in Chromium's PDF at 1200 dpi to report whether Chromium kept 1:1.
+import { execFileSync } from 'node:child_process';
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { chromium } from 'playwright-core';
+import { presetSpec, type StrapSpec } from '@shared/pattern/index.ts';
+import type { Drawing, DrawingPiece } from '@shared/render/drawing.ts';
+import { buildFullSizeSvg, printRevisionInline, type RevisionMeta } from '../../server/modules/print/index.ts';
+import { revisionDrawing } from '../../server/modules/print/revision-drawing.ts';
+import { darkSpan, parsePgm } from '../print/pdf-tools.ts';
+
+const OUT = join(process.cwd(), 'test-output', 'print', 'bench');
+mkdirSync(OUT, { recursive: true });
+const RUNS = 7;
+
+/** Median wall time of `fn` in ms over RUNS runs after one warm-up. */
+async function medianMs(fn: () => Promise<unknown>): Promise<number> {
+  await fn();
+  const t: number[] = [];
+  for (let i = 0; i < RUNS; i++) {
+    (globalThis as { gc?: () => void }).gc?.();
+    const s = performance.now();
+    await fn();
+    t.push(performance.now() - s);
+  }
+  t.sort((a, b) => a - b);
+  return t[Math.floor(t.length / 2)] ?? NaN;
+}
+
+// A 1 in check square as the first piece: renderSvg places it at the sheet's 5 mm margin.
+const SQUARE: DrawingPiece = {
+  id: 'check',
+  name: 'check square',
+  lengthMm: 25.4,
+  widthMm: 25.4,
+  bounds: { minX: 0, minY: 0, maxX: 25.4, maxY: 25.4 },
+  items: [{ type: 'path', layer: 'cut', commands: [{ op: 'M', x: 0, y: 0 }, { op: 'L', x: 25.4, y: 0 }, { op: 'L', x: 25.4, y: 25.4 }, { op: 'L', x: 0, y: 25.4 }, { op: 'Z' }] }],
+};
+
+const RUN = [
+  { name: 'XS', girthMm: 254 },
+  { name: 'S', girthMm: 304.8 },
+  { name: 'M', girthMm: 355.6 },
+  { name: 'L', girthMm: 406.4 },
+  { name: 'XL', girthMm: 457.2 },
+];
+const META: RevisionMeta = { patternName: 'Collar for Juniper', revision: 1, date: '2026-12-01', sizes: RUN };
+
+interface Case {
+  name: string;
+  spec: StrapSpec;
+  size?: string;
+}
+const CASES: Case[] = [
+  { name: '21 in collar, Letter', spec: presetSpec('collar') },
+  { name: 'five-size run, Letter', spec: presetSpec('collar'), size: 'all' },
+];
+
+/** Side of the check square in Chromium's PDF, mm, read between the stroke centres at 1200 dpi. */
+function squareSideMm(pdfPath: string): number {
+  const dpi = 1200;
+  const px = (mm: number) => String(Math.round((mm / 25.4) * dpi));
+  const g = parsePgm(execFileSync('pdftoppm', ['-gray', '-r', String(dpi), '-aa', 'no', '-aaVector', 'no', '-f', '1', '-l', '1', '-x', px(2), '-y', px(2), '-W', px(32), '-H', px(32), pdfPath], { maxBuffer: 1 << 28 }));
+  const row = Math.round(g.height / 2);
+  const s = darkSpan(g, 'row', row);
+  if (!s) return NaN;
+  // The left stroke: from s.first to where it turns white; the right one likewise from s.last.
+  let a2 = s.first;
+  while ((g.data[row * g.width + a2 + 1] ?? 255) < 128) a2++;
+  let b1 = s.last;
+  while ((g.data[row * g.width + b1 - 1] ?? 255) < 128) b1--;
+  const centres = (b1 + s.last) / 2 - (s.first + a2) / 2;
+  return (centres / dpi) * 25.4;
+}
+
+const browser = await chromium.launch({
+  executablePath: '/usr/bin/chromium',
+  args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic', '--disable-dev-shm-usage'],
+});
+try {
+  const page = await browser.newPage();
+  console.log('case                    ours ms   chromium ms   ours/chromium   ours pages   chromium 1 in square');
+  for (const c of CASES) {
+    const opts = { paper: 'letter' as const, ...(c.size ? { size: c.size } : {}) };
+    const ours = await printRevisionInline(c.spec, opts, META);
+    writeFileSync(join(OUT, `${c.name.replace(/\W+/g, '-')}-ours.pdf`), ours.body);
+    const oursMs = await medianMs(() => printRevisionInline(c.spec, opts, META));
+    const { drawing } = revisionDrawing(c.spec, opts, META);
+    const withSquare: Drawing = { ...drawing, pieces: [SQUARE, ...drawing.pieces] };
+    const svg = buildFullSizeSvg(withSquare);
+    const w = /width="([\d.]+)mm"/.exec(svg)?.[1];
+    const h = /height="([\d.]+)mm"/.exec(svg)?.[1];
+    const html = `<!doctype html><html><head><style>@page{margin:0}html,body{margin:0;padding:0}svg{display:block}</style></head><body>${svg.replace(/^<\?xml[^>]*>\s*/, '')}</body></html>`;
+    const viaChromium = async () => {
+      await page.setContent(html);
+      return page.pdf({ width: `${w}mm`, height: `${h}mm`, margin: { top: '0', right: '0', bottom: '0', left: '0' }, printBackground: true, scale: 1 });
+    };
+    const chromePdf = await viaChromium();
+    const chromePath = join(OUT, `${c.name.replace(/\W+/g, '-')}-chromium.pdf`);
+    writeFileSync(chromePath, chromePdf);
+    const chromeMs = await medianMs(viaChromium);
+    const side = squareSideMm(chromePath);
+    const pages = (ours.body.toString('latin1').match(/\/Type \/Page\b/g) ?? []).length;
+    const keeps = Math.abs(side - 25.4) / 25.4 < 0.001 ? 'kept 1:1' : 'NOT 1:1';
+    console.log(
+      `${c.name.padEnd(22)} ${oursMs.toFixed(1).padStart(8)}   ${chromeMs.toFixed(1).padStart(11)}   ${(oursMs / chromeMs).toFixed(3).padStart(13)}   ${String(pages).padStart(10)}   ${side.toFixed(3)} mm (${(((side - 25.4) / 25.4) * 100).toFixed(3)} %) ${keeps}`,
+    );
+  }
+  console.log(`\nmedian of ${RUNS} runs after a warm-up; Chromium writes one sheet the size of the SVG (no tiling, no page furniture).`);
+} finally {
+  await browser.close();
+}
