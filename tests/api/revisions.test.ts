@@ -116,6 +116,15 @@ describe('history', () => {
     await expect(t.db('revisions').where({ pattern_id: w.collar.pattern.id }).delete()).rejects.toThrow(/immutable/);
   });
 
+  it('when a client tries to overwrite or delete a revision over HTTP, then no route exists for it and the row is unchanged', async () => {
+    const before = await t.db('revisions').where({ pattern_id: w.collar.pattern.id });
+    const rev = `${path()}/revisions/1`;
+    for (const method of ['put', 'patch', 'delete'] as const) {
+      await request(t.app)[method](rev).set('Cookie', w.owner.cookie).send({ spec: collarWithGirth(999), note: 'rewritten' }).expect(404);
+    }
+    expect(await t.db('revisions').where({ pattern_id: w.collar.pattern.id })).toEqual(before);
+  });
+
   it('when a revision number does not exist or is not a number, then 404', async () => {
     await request(t.app).get(`${path()}/revisions/9`).set('Cookie', w.owner.cookie).expect(404);
     await request(t.app).get(`${path()}/revisions/abc`).set('Cookie', w.owner.cookie).expect(404);
