@@ -21,7 +21,7 @@ export function Component() {
   return (
     <div className="grid gap-6">
       <PatternHeader pattern={detail.pattern} head={detail.head} tabs={patternTabs(id)} />
-      <PatternEditor key={id} detail={detail} canEdit={canEdit} />
+      <PatternEditor key={id} detail={detail} canEdit={canEdit} canShare={me ? can(me.role, 'share.create') : false} />
     </div>
   );
 }

@@ -11,17 +11,20 @@ import { SpecFields } from '../spec-form/spec-fields.tsx';
 import { Downloads } from './downloads.tsx';
 import { LivePreview } from './live-preview.tsx';
 import { SavePanel, type Conflict } from './save-panel.tsx';
+import { SharePanel } from './share-panel.tsx';
 
 export interface PatternEditorProps {
   detail: PatternDetail;
   canEdit: boolean;
+  /** Makers and owners create share links. */
+  canShare: boolean;
 }
 
 /**
  * The pattern page's working area: the spec form beside the live preview, the save with a
  * note (compare-and-set on the ETag the form started from), and the downloads.
  */
-export function PatternEditor({ detail, canEdit }: PatternEditorProps) {
+export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps) {
   const id = detail.pattern.id;
   const spec = detail.head.spec as StrapSpec;
   // The revision this form started from; only a save or an explicit choice moves it.
@@ -107,6 +110,11 @@ export function PatternEditor({ detail, canEdit }: PatternEditorProps) {
               dirty={form.formState.isDirty}
             />
           </Panel>
+          {canShare && (
+            <Panel title="Share read-only">
+              <SharePanel patternId={id} headNumber={base.number} />
+            </Panel>
+          )}
         </div>
       </div>
     </div>
