@@ -16,6 +16,7 @@ import { Panel } from '@/components/ui/panel.tsx';
 import { isApiError } from '@/lib/api-client.ts';
 import { formatWhen } from '@/lib/format-when.ts';
 import { formatLength } from '@shared/units/format-length.ts';
+import { kindLabel } from '@/features/patterns/kinds.ts';
 
 export const clientLoader = (queryClient: QueryClient): LoaderFunction => async ({ params }) => {
   // A revoked link is a page to show (404), not a crash: prefetch keeps the error for the component.
@@ -47,7 +48,7 @@ export function Component() {
           <p className="text-sm font-medium uppercase tracking-widest text-hide-500">Shared by {data.shopName}</p>
           <h1 className="mt-1 text-3xl font-semibold tracking-tight text-hide-900">{data.pattern.name}</h1>
           <p className="mt-1 flex flex-wrap items-center gap-2 text-sm text-hide-600">
-            <Badge tone="brass">{data.pattern.kind}</Badge> Revision {data.revision.number}, {formatWhen(data.revision.createdAt)} · read-only
+            <Badge tone="brass">{kindLabel(data.pattern.kind)}</Badge> Revision {data.revision.number}, {formatWhen(data.revision.createdAt)} · read-only
             {strap && <> · blank {formatLength(strap.blankLengthMm, unit)} × {formatLength(strap.widthMm, unit)}</>}
           </p>
         </div>

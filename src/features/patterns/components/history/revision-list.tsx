@@ -22,7 +22,7 @@ export function RevisionList({ revisions, headNumber, canRestore, restoring, hre
         <li key={r.number} className="flex flex-wrap items-start justify-between gap-4 rounded-lg border border-hide-200 bg-white/80 px-4 py-3">
           <div className="min-w-0">
             <p className="flex flex-wrap items-center gap-2">
-              <Link to={hrefOf(r.number)} className="font-semibold text-hide-900 underline decoration-hide-300 underline-offset-4 hover:decoration-hide-700">
+              <Link to={hrefOf(r.number)} data-testid="revision-link" className="font-semibold text-hide-900 underline decoration-hide-300 underline-offset-4 hover:decoration-hide-700">
                 Revision {r.number}
               </Link>
               {r.number === headNumber && <Badge tone="moss">current</Badge>}

@@ -1,0 +1,134 @@
+// End-to-end: history, compare, restore, a save that loses the race (412), and share links,
+// in Chromium against the real server with a fresh database.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { presetSpec } from '@shared/pattern/presets/index.ts';
+import { startTestServer } from '../helpers/test-server.ts';
+import { ensureClientBuilt } from './support/build-client.ts';
+import { launchBrowser, type TestBrowser } from './support/browser.ts';
+import { snap } from './support/screenshots.ts';
+
+type Server = Awaited<ReturnType<typeof startTestServer>>;
+
+const maker = { name: 'Tobias Harrow', shopName: 'Harrow & Finch Leatherworks', email: 'tobias@harrowfinch.example', password: 'waxed linen and a round knife' };
+
+describe('pattern history and sharing in the browser', () => {
+  let server: Server;
+  let browser: TestBrowser;
+  let page: Page;
+  let id = 0;
+  let shareUrl = '';
+
+  beforeAll(async () => {
+    await ensureClientBuilt();
+    server = await startTestServer();
+    browser = await launchBrowser();
+    page = await browser.context.newPage();
+    await page.goto(server.url + '/sign-up');
+    await page.getByLabel('Your name').fill(maker.name);
+    await page.getByLabel('Shop name').fill(maker.shopName);
+    await page.getByLabel('E-mail').fill(maker.email);
+    await page.getByLabel('Password').fill(maker.password);
+    await page.getByRole('button', { name: 'Create shop and sign in' }).click();
+    await page.getByTestId('shop-name').waitFor();
+    // Setup through the real API with the session the browser holds.
+    const res = await page.request.post(server.url + '/api/patterns', {
+      headers: { Origin: server.url },
+      data: { name: 'Belt for Tobias Harrow', kind: 'belt', spec: presetSpec('belt'), note: 'Shop standard casual belt.' },
+    });
+    expect(res.status()).toBe(201);
+    id = ((await res.json()) as { pattern: { id: number } }).pattern.id;
+  }, 180_000);
+
+  afterAll(async () => {
+    await browser?.close();
+    await server?.close();
+  });
+
+  it('when the waist changes from 34 in to 36 in and is saved, then history lists both revisions newest first', async () => {
+    await page.goto(`${server.url}/patterns/${id}`);
+    await page.getByTestId('drawing-preview').locator('svg').waitFor();
+    await page.getByLabel('Girth').fill('36');
+    await page.getByLabel('Note for this revision').fill('Tobias: waist now 36 in.');
+    await page.getByRole('button', { name: 'Save revision 2' }).click();
+    await page.getByText('Saved as revision 2.').waitFor();
+    await page.getByRole('link', { name: 'History' }).click();
+    const items = page.getByTestId('revision-list').locator('li');
+    await items.first().waitFor();
+    await expect(items.getByTestId('revision-link').allTextContents()).resolves.toEqual(['Revision 2', 'Revision 1']);
+    await snap(page, 'history-01-list');
+  });
+
+  it('when revisions 1 and 2 are compared, then the girth shows both values in inches and the holes moved 2 in toward the tip', async () => {
+    await page.getByRole('link', { name: 'Changes from 1' }).click();
+    const params = page.getByTestId('compare-params');
+    await params.waitFor();
+    const row = params.locator('tr', { hasText: 'girthMm' });
+    await expect(row.locator('td').allTextContents()).resolves.toEqual(['34 in', '36 in']);
+    // Belt size = bar to middle hole = waist + 2 in (common practice): the holes move by the waist change.
+    await expect(page.getByTestId('compare-moved').first().textContent()).resolves.toContain('+2 in');
+    await snap(page, 'history-02-compare');
+  });
+
+  it('when revision 1 is restored, then revision 3 is the head, marked as restored from 1, and nothing was removed', async () => {
+    await page.getByRole('link', { name: 'History' }).click();
+    const first = page.getByTestId('revision-list').locator('li', { hasText: 'Revision 1' });
+    await first.getByRole('button', { name: 'Restore as new revision' }).click();
+    await page.getByText('Revision 1 is restored as revision 3.').waitFor();
+    const items = page.getByTestId('revision-list').locator('li');
+    await expect(items.getByTestId('revision-link').allTextContents()).resolves.toEqual(['Revision 3', 'Revision 2', 'Revision 1']);
+    await page.getByText('restored from 1').waitFor();
+    await snap(page, 'history-03-restored');
+  });
+
+  it('when someone else saves while the form is open, then saving shows who won, keeps the form, and saving on top works', async () => {
+    await page.goto(`${server.url}/patterns/${id}`);
+    await page.getByTestId('drawing-preview').locator('svg').waitFor();
+    await page.getByLabel('Girth').fill('35');
+    // Another save lands on revision 3 first (RFC 9110 If-Match on the head's strong ETag).
+    const head = await page.request.get(`${server.url}/api/patterns/${id}`);
+    const etag = head.headers()['etag'] ?? '';
+    const spec = { ...presetSpec('belt'), girthMm: 38 * 25.4 };
+    const other = await page.request.post(`${server.url}/api/patterns/${id}/revisions`, { headers: { Origin: server.url, 'If-Match': etag }, data: { spec, note: 'Ilse: measured again at the fitting.' } });
+    expect(other.status()).toBe(201);
+
+    await page.getByRole('button', { name: 'Save revision 4' }).click();
+    await page.getByText('Revision 4 was saved while you were editing').waitFor();
+    expect(await page.getByLabel('Girth').inputValue()).toBe('35');
+    await snap(page, 'history-04-conflict');
+    await page.getByRole('button', { name: 'Keep my changes, save on top of 4' }).click();
+    await page.getByRole('button', { name: 'Save revision 5' }).click();
+    await page.getByText('Saved as revision 5.').waitFor();
+    await expect(page.getByTestId('head-revision').textContent()).resolves.toContain('Revision 5');
+  });
+
+  it('when a share link to the head is opened by a stranger, then the drawing shows read-only, and after revoking it the link is dead', async () => {
+    await page.getByRole('button', { name: 'Link to revision 5' }).click();
+    const url = page.getByTestId('share-url');
+    await url.waitFor();
+    shareUrl = await url.inputValue();
+    expect(shareUrl.startsWith(server.url + '/s/')).toBe(true);
+    await snap(page, 'history-05-share-created');
+
+    const stranger = await launchBrowser();
+    try {
+      const p = await stranger.context.newPage();
+      await p.goto(shareUrl);
+      await p.getByRole('heading', { name: 'Belt for Tobias Harrow' }).waitFor();
+      await p.getByTestId('drawing-preview').locator('svg').waitFor();
+      await p.getByText('Shared by Harrow & Finch Leatherworks').waitFor();
+      // Read-only: no form, no library, no shop navigation.
+      expect(await p.locator('input:not([readonly])').count()).toBe(0);
+      expect(await p.getByRole('link', { name: 'Library' }).count()).toBe(0);
+      await snap(p, 'history-06-share-page');
+
+      await page.getByRole('list', { name: 'Share links' }).getByRole('button', { name: 'Revoke' }).click();
+      await page.getByRole('list', { name: 'Share links' }).waitFor({ state: 'detached' });
+      await p.reload();
+      await p.getByText('This link does not open a pattern').waitFor();
+      await snap(p, 'history-07-share-revoked');
+    } finally {
+      await stranger.close();
+    }
+  });
+});
