@@ -4,7 +4,12 @@ import type { Config } from './config.ts';
 import { migrateLatest, openDb } from './db/connection.ts';
 import { migrationLevel } from './db/migration-level.ts';
 import { listen, stopOnSignals, type RunningServer } from './index.ts';
-import { DEMO_PASSWORD, DEMO_USERS, seed } from '../db/seeds/01-demo-shop.ts';
+import { dirname, join } from 'node:path';
+import { DEMO_PASSWORD, DEMO_USERS, seed as seedShop } from '../db/seeds/01-demo-shop.ts';
+import { seed as seedPatterns } from '../db/seeds/02-demo-patterns.ts';
+import type { AppDeps } from './app.ts';
+import { startFakeSmtp } from './modules/mail/fake-smtp.ts';
+import { smtpTransport } from './modules/mail/outbox.ts';
 
 /** Migrates to the latest level and (re)seeds the demo shop. */
 export async function prepareDatabase(config: Config): Promise<Knex> {
@@ -12,8 +17,24 @@ export async function prepareDatabase(config: Config): Promise<Knex> {
   const applied = await migrateLatest(db);
   const level = await migrationLevel(db);
   console.log(`database ${config.databaseFile}: ${applied.length} migration(s) applied now, level ${level.level} (${level.latest})`);
-  if (config.env !== 'production') await seed(db);
+  if (config.env !== 'production') {
+    await seedShop(db);
+    await seedPatterns(db);
+  }
   return db;
+}
+
+/**
+ * Outside production without SMTP settings: a fake SMTP server on 127.0.0.1:SMTP_PORT (any
+ * free port if taken) keeping what it receives beside the database, shown at /dev/mail.
+ */
+export async function prepareMail(config: Config): Promise<{ mail: AppDeps['mail']; close(): Promise<void>; note: string }> {
+  if (config.env === 'production' || config.smtp.host) {
+    return { mail: { transport: smtpTransport(config) }, close: async () => undefined, note: config.smtp.host ? `mail via ${config.smtp.host}:${config.smtp.port}` : 'mail: no SMTP_HOST set, messages are only recorded' };
+  }
+  const folder = join(dirname(config.databaseFile), 'dev-mailbox');
+  const smtp = await startFakeSmtp({ port: config.smtp.port, folder }).catch(() => startFakeSmtp({ port: 0, folder }));
+  return { mail: { transport: smtpTransport(config, smtp.port), mailbox: smtp.mailbox }, close: smtp.close, note: `fake SMTP server on 127.0.0.1:${smtp.port}` };
 }
 
 /** The lines that tell a newcomer how to sign in. */
@@ -26,9 +47,10 @@ export function demoSignIns(): string {
 }
 
 /** Prepare the database, listen, and stop cleanly on signals. */
-export async function boot(config: Config): Promise<RunningServer> {
+export async function boot(config: Config): Promise<RunningServer & { mailNote: string }> {
   const db = await prepareDatabase(config);
-  const running = await listen(config, db);
-  stopOnSignals([running.stop]);
-  return running;
+  const mail = await prepareMail(config);
+  const running = await listen(config, db, mail.mail);
+  stopOnSignals([running.stop, mail.close]);
+  return { ...running, mailNote: mail.note };
 }

@@ -1,7 +1,7 @@
 // The server process: config, database, listen, and a graceful stop on SIGTERM/SIGINT.
 import type { Server } from 'node:http';
 import type { Knex } from 'knex';
-import { createApp } from './app.ts';
+import { createApp, type AppDeps } from './app.ts';
 import { ConfigError, loadConfig, type Config } from './config.ts';
 import { openDb } from './db/connection.ts';
 
@@ -28,8 +28,8 @@ export function configOrExit(): Config {
 }
 
 /** Opens the database and listens on config.port; the caller has migrated already. */
-export async function listen(config: Config, db: Knex = openDb(config.databaseFile)): Promise<RunningServer> {
-  const app = createApp({ db, config });
+export async function listen(config: Config, db: Knex = openDb(config.databaseFile), mail?: AppDeps['mail']): Promise<RunningServer> {
+  const app = createApp({ db, config, ...(mail ? { mail } : {}) });
   const server = app.listen(config.port, config.host);
   await new Promise<void>((resolve, reject) => server.once('listening', resolve).once('error', reject));
   const address = server.address();

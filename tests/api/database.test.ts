@@ -3,6 +3,7 @@ import Database from 'better-sqlite3';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { writeTransaction } from '../../server/db/write-transaction.ts';
 import { DEMO_SHOP, DEMO_USERS, seed } from '../../db/seeds/01-demo-shop.ts';
+import { seed as seedPatterns } from '../../db/seeds/02-demo-patterns.ts';
 import { createTestApp, type TestApp } from '../helpers/test-app.ts';
 
 let t: TestApp;
@@ -59,5 +60,18 @@ describe('demo seed', () => {
     const roles = await t.db('memberships as m').join('users as u', 'u.id', 'm.user_id').orderBy('m.created_at').pluck('m.role');
     expect(roles).toEqual(['owner', 'maker', 'apprentice']);
     expect(await t.db('shops').where({ id: ownShop.id }).first()).toMatchObject({ name: 'Park Strapworks' });
+  });
+
+  it('when both seeds run twice, then the demo patterns and their revisions exist once, numbered from 1', async () => {
+    for (let i = 0; i < 2; i += 1) {
+      await seed(t.db);
+      await seedPatterns(t.db);
+    }
+    const patterns = await t.db('patterns').orderBy('name');
+    expect(patterns.map((p) => p.name)).toEqual(['Belt, order 1043 (Ed Marsh)', "Juniper's collar", 'Watch strap, 20 mm lugs']);
+    for (const p of patterns) {
+      const numbers = await t.db('revisions').where({ pattern_id: p.id }).orderBy('number').pluck('number');
+      expect(numbers).toEqual(Array.from({ length: p.head_number }, (_, i) => i + 1));
+    }
   });
 });
