@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { PIECE_PAD_MM, buildTemplatePdf, planTemplate } from '../../server/modules/print/template-pdf.ts';
 import { parsePrintOptions } from '../../server/modules/print/print-options.ts';
 import type { PagePlan } from '../../server/modules/print/page-plan.ts';
-import { beltDrawing, collarRunDrawing, stripPiece } from './fixtures.ts';
+import { beltDrawing, collarRunDrawing, stripPiece, watchDrawing } from './fixtures.ts';
 import { pageText, renderCrop, writeOut } from './pdf-tools.ts';
 
 /** Length of the blank [0, L] each sheet shows, summed, minus the overlaps that fall on it. */
@@ -73,6 +73,27 @@ function markColumnsMm(g: { width: number; height: number }, dpi: number, rgb: B
   }
   return cols;
 }
+
+describe('packing small pieces', () => {
+  it('when a belt comes with a keeper, then the keeper is packed under the belt on one of its sheets, labelled, not on a sheet of its own', async () => {
+    const belt = beltDrawing();
+    const d = { ...belt, pieces: [...belt.pieces, stripPiece('keeper', 'Keeper for the belt', 110, 12.7, [])] };
+    const options = parsePrintOptions({ paper: 'letter' });
+    const plan = planTemplate(d, options);
+    const alone = planTemplate(belt, options);
+    expect(plan.pages.length).toBe(alone.pages.length);
+    const host = plan.pages.find((p) => p.placements.some((pl) => pl.pieceIndex === 1));
+    expect(host?.run).toBeDefined();
+    const path = writeOut('belt-keeper.pdf', await buildTemplatePdf({ drawing: d, options }));
+    expect(pageText(path, host?.number ?? 0)).toContain('Keeper for the belt · blank');
+  });
+
+  it('when a watch strap (120 and 75 mm pieces, common practice) prints on A4, then both pieces share one sheet', () => {
+    const plan = planTemplate(watchDrawing(), parsePrintOptions({ paper: 'a4' }));
+    expect(plan.pages.length).toBe(1);
+    expect(plan.pages[0]?.placements.map((p) => p.pieceIndex).sort()).toEqual([0, 1]);
+  });
+});
 
 describe('seam marks and margins on the printed sheets', () => {
   it('when the belt prints, then every seam mark has its partner on the next sheet at the same datum distance, and each sheet names its joins', async () => {

@@ -28,6 +28,8 @@ export interface PackedRun {
   sheets: number;
   /** Per sheet, its placements. */
   placements: Placement[][];
+  /** Page y (mm) below the run's last row: the room under it is free for small pieces. */
+  freeFromYMm: number;
 }
 
 function tilesFor(spanMm: number, areaWidthMm: number, stepMm: number): number {
@@ -86,34 +88,68 @@ export function packRuns(long: readonly PlanPiece[], frame: PageFrame, overlapMm
       }
       top += h + ROW.gapMm;
     }
-    return { pieceIndexes: g.map((p) => p.index), originXMm: originX, stepMm: step, sheets, placements };
+    return { pieceIndexes: g.map((p) => p.index), originXMm: originX, stepMm: step, sheets, placements, freeFromYMm: top };
   });
 }
 
-/** Packs pieces that fit one sheet's width onto shared sheets, row by row (shelf packing). */
-export function packShelves(short: readonly PlanPiece[], frame: PageFrame): Placement[][] {
-  const { area } = frame;
+/** Free room on an existing sheet (page index into the plan) that shelves may fill. */
+export interface FreeRegion {
+  pageIndex: number;
+  box: BoxMm;
+}
+
+/**
+ * Packs pieces that fit one sheet's width row by row (shelf packing): first into the free
+ * regions given (the room under a run's rows), in order, then onto new sheets. Returns the
+ * placements added to each free region's page and the new sheets.
+ */
+export function packShelves(
+  short: readonly PlanPiece[],
+  frame: PageFrame,
+  free: readonly FreeRegion[] = [],
+): { into: Map<number, Placement[]>; pages: Placement[][] } {
+  const into = new Map<number, Placement[]>();
   const pages: Placement[][] = [];
-  let page: Placement[] | undefined;
-  let rowTop = area.minY;
+  const bins: { box: BoxMm; out: Placement[] }[] = [];
+  let bin = -1;
+  let rowTop = 0;
   let rowH = 0;
-  let x = area.minX;
+  let x = 0;
+  const open = (i: number): boolean => {
+    if (i < free.length) {
+      const f = free[i] as FreeRegion;
+      const out = into.get(f.pageIndex) ?? [];
+      into.set(f.pageIndex, out);
+      bins[i] = { box: f.box, out };
+    } else {
+      const out: Placement[] = [];
+      pages.push(out);
+      bins[i] = { box: frame.area, out };
+    }
+    bin = i;
+    const b = bins[i]?.box as BoxMm;
+    rowTop = b.minY;
+    rowH = 0;
+    x = b.minX;
+    return true;
+  };
   for (const p of short) {
     const w = p.bounds.maxX - p.bounds.minX;
     const h = rowHeightMm(p);
-    if (page && x > area.minX && x + w > area.maxX + 1e-9) {
-      rowTop += rowH + ROW.gapMm;
-      rowH = 0;
-      x = area.minX;
+    if (bin < 0) open(0);
+    for (;;) {
+      const box = bins[bin]?.box as BoxMm;
+      if (x > box.minX && x + w > box.maxX + 1e-9) {
+        rowTop += rowH + ROW.gapMm;
+        rowH = 0;
+        x = box.minX;
+      }
+      if (rowTop + h <= box.maxY + 1e-9 && x + w <= box.maxX + 1e-9) break;
+      // A new sheet always takes a piece (the planner checked every row fits the area).
+      if (bin >= free.length && rowTop === box.minY && x === box.minX) break;
+      open(bin + 1);
     }
-    if (!page || rowTop + h > area.maxY + 1e-9) {
-      page = [];
-      pages.push(page);
-      rowTop = area.minY;
-      rowH = 0;
-      x = area.minX;
-    }
-    page.push({
+    bins[bin]?.out.push({
       pieceIndex: p.index,
       offsetXMm: x - p.bounds.minX,
       offsetYMm: rowTop + ROW.captionMm - p.bounds.minY,
@@ -124,5 +160,5 @@ export function packShelves(short: readonly PlanPiece[], frame: PageFrame): Plac
     x += w + ROW.colGapMm;
     rowH = Math.max(rowH, h);
   }
-  return pages;
+  return { into, pages };
 }

@@ -2,7 +2,7 @@ import type { BoxMm } from '@shared/render/drawing.ts';
 import { FRAME, pageFrame, type PageFrame } from './page-frame.ts';
 import type { PaperSize } from './paper.ts';
 import type { Orientation } from './print-options.ts';
-import { packRuns, packShelves, rowHeightMm, type PlanPiece } from './pack.ts';
+import { packRuns, packShelves, rowHeightMm, type FreeRegion, type PlanPiece } from './pack.ts';
 
 /** A tile seam: where sheet `leftPage` and the next sheet of the run overlap. */
 export interface Seam {
@@ -113,6 +113,7 @@ export function planPagesIn(
   const runs: PlannedRun[] = [];
   const seams: Seam[] = [];
 
+  const free: FreeRegion[] = [];
   for (const run of packRuns(long, frame, overlapMm)) {
     const first = pages.length + 1;
     const runIndex = runs.length;
@@ -143,8 +144,14 @@ export function planPagesIn(
       });
     }
     runs.push({ index: runIndex, pages: Array.from({ length: run.sheets }, (_, k) => first + k), pieceIndexes: run.pieceIndexes, seams: runSeams });
+    // The room under the rows, last sheet first (a strap's tip sheet is the emptiest).
+    for (let k = run.sheets - 1; k >= 0; k--) {
+      free.push({ pageIndex: first - 1 + k, box: { minX: frame.area.minX, maxX: frame.area.maxX, minY: run.freeFromYMm, maxY: frame.area.maxY } });
+    }
   }
-  for (const placements of packShelves(short, frame)) {
+  const shelves = packShelves(short, frame, free);
+  for (const [pageIndex, placements] of shelves.into) pages[pageIndex]?.placements.push(...placements);
+  for (const placements of shelves.pages) {
     pages.push({ number: pages.length + 1, placements });
   }
   return { frame, overlapMm, pages, runs, seams };

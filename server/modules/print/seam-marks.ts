@@ -20,6 +20,7 @@ function diamond(doc: PDFKit.PDFDocument, xMm: number, yMm: number, rMm: number)
 export function drawSeamMarks(doc: PDFKit.PDFDocument, page: PlannedPage, seam: Seam, side: 'left' | 'right'): void {
   doc.save();
   for (const pl of page.placements) {
+    if (!pl.tile) continue; // a small piece packed under the run is not part of the seam
     const x = seam.markXMm + pl.offsetXMm;
     // Letters sit beside the diamonds; keep their cap height inside the row (and the area).
     const top = pl.clip.minY + 2.6;

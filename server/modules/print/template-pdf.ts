@@ -10,6 +10,7 @@ import { planPages, type PagePlan, type PlannedPage } from './page-plan.ts';
 import { addPageMm, createDoc, finishDoc } from './pdf-doc.ts';
 import { drawPlacement } from './pdf-draw.ts';
 import { textMm } from './pdf-text.ts';
+import { measuredBounds } from './text-bounds.ts';
 import type { PrintOptions } from './print-options.ts';
 import { drawSeamMarks } from './seam-marks.ts';
 import { drawTitleBlock, TITLE_BLOCK_MM } from './title-block.ts';
@@ -35,16 +36,19 @@ export interface TemplateInput {
 export const PIECE_PAD_MM = 2;
 const PIECE_PAD_Y_MM = 1;
 
-/** The planner's view of a Drawing's pieces (bounds padded by {@link PIECE_PAD_MM}). */
+/** The planner's view of a Drawing's pieces (labels measured in Plex, padded by {@link PIECE_PAD_MM}). */
 export function planPieces(drawing: Drawing): PlanPiece[] {
   const pad = PIECE_PAD_MM;
-  return drawing.pieces.map((p, index) => ({
-    index,
-    id: p.id,
-    name: p.name,
-    lengthMm: p.lengthMm,
-    bounds: { minX: p.bounds.minX - pad, maxX: p.bounds.maxX + pad, minY: p.bounds.minY - PIECE_PAD_Y_MM, maxY: p.bounds.maxY + PIECE_PAD_Y_MM },
-  }));
+  return drawing.pieces.map((p, index) => {
+    const b = measuredBounds(p);
+    return {
+      index,
+      id: p.id,
+      name: p.name,
+      lengthMm: p.lengthMm,
+      bounds: { minX: b.minX - pad, maxX: b.maxX + pad, minY: b.minY - PIECE_PAD_Y_MM, maxY: b.maxY + PIECE_PAD_Y_MM },
+    };
+  });
 }
 
 /** Lays the drawing out on sheets per the options (exported so tests can check the tiling). */
