@@ -6,7 +6,7 @@ import type { Page } from 'playwright-core';
 import { startTestServer } from '../helpers/test-server.ts';
 import { ensureClientBuilt } from './support/build-client.ts';
 import { launchBrowser, type TestBrowser } from './support/browser.ts';
-import { snap } from './support/screenshots.ts';
+import { snap, snapElement } from './support/screenshots.ts';
 
 type Server = Awaited<ReturnType<typeof startTestServer>>;
 
@@ -82,6 +82,10 @@ describe('the pattern library in the browser', () => {
     const after = await page.getByTestId('drawing-preview').innerHTML();
     expect(after).not.toBe(before);
     await snap(page, 'library-04-girth-changed');
+    await snapElement(page.getByTestId('drawing-preview'), 'library-04a-preview-whole');
+    await page.getByRole('button', { name: 'Full size' }).click();
+    await snapElement(page.getByTestId('drawing-preview'), 'library-04b-preview-full-size');
+    await page.getByRole('button', { name: 'Whole strap' }).click();
   });
 
   it('when the owner saves with a note, then revision 2 is the head and the form is clean', async () => {

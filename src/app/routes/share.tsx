@@ -53,7 +53,7 @@ export function Component() {
           </p>
         </div>
         <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_340px]">
-          <div className="grid gap-4">
+          <div className="grid grid-cols-[minmax(0,1fr)] gap-4">
             <Panel title="Drawing">
               <DrawingView svg={svg} label={`Drawing of ${data.pattern.name}`} />
             </Panel>

@@ -31,7 +31,7 @@ export function DrawingView({ svg, label }: { svg: string; label: string }) {
         data-testid="drawing-preview"
         tabIndex={0}
         className={cx(
-          'overflow-auto rounded-md border border-hide-200 bg-white p-3',
+          'drawing-screen overflow-auto rounded-md border border-hide-200 bg-white p-3',
           zoom === 'fit' ? '[&>svg]:h-auto [&>svg]:w-full' : 'max-h-[28rem]',
         )}
         dangerouslySetInnerHTML={{ __html: svg }}

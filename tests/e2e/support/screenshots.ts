@@ -2,7 +2,7 @@
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import type { Page } from 'playwright-core';
+import type { Locator, Page } from 'playwright-core';
 
 const outDir = fileURLToPath(new URL('../../../test-output/e2e/', import.meta.url));
 
@@ -11,5 +11,13 @@ export async function snap(page: Page, name: string): Promise<string> {
   mkdirSync(outDir, { recursive: true });
   const path = join(outDir, `${name}.png`);
   await page.screenshot({ path, fullPage: true });
+  return path;
+}
+
+/** Saves a PNG of one element (e.g. the drawing preview) named `name.png`. */
+export async function snapElement(locator: Locator, name: string): Promise<string> {
+  mkdirSync(outDir, { recursive: true });
+  const path = join(outDir, `${name}.png`);
+  await locator.screenshot({ path });
   return path;
 }

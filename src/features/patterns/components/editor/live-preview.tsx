@@ -35,7 +35,7 @@ export function LivePreview({ values, revisionLabel }: { values: unknown; revisi
   const unit = layout.units;
   const strap = layout.pieces.find((p) => p.role === 'strap');
   return (
-    <div className="grid gap-4">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-4">
       <Panel
         title="Preview"
         aside={

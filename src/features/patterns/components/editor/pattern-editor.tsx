@@ -62,7 +62,7 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
 
   return (
     <div className="grid items-start gap-6 lg:grid-cols-[minmax(320px,420px)_minmax(0,1fr)]">
-      <div className="grid gap-4 lg:sticky lg:top-4">
+      <div className="grid gap-4">
         {!canEdit && (
           <Notice tone="info" role="note">
             Your role can read and print this pattern. A maker or the owner changes it.
@@ -74,7 +74,7 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
           </fieldset>
         </form>
       </div>
-      <div className="grid gap-4">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4">
         <LivePreview values={values} revisionLabel={String(base.number)} />
         <div className="grid gap-4 xl:grid-cols-2">
           {canEdit && (
