@@ -1,4 +1,6 @@
 import fc from 'fast-check';
+import { presetSpec } from '@shared/pattern/index.ts';
+import { revisionDrawing } from '../../server/modules/print/revision-drawing.ts';
 import { describe, expect, it } from 'vitest';
 import { PIECE_PAD_MM, buildTemplatePdf, planTemplate } from '../../server/modules/print/template-pdf.ts';
 import { parsePrintOptions } from '../../server/modules/print/print-options.ts';
@@ -134,12 +136,13 @@ describe('seam marks and margins on the printed sheets', () => {
     }
   });
 
-  it('when a strap fills the sheet to its edges, then no ink falls inside the margins', async () => {
-    const d = { title: beltDrawing().title, pieces: [stripPiece('s', 'Tall strap', 1500, 120, [200, 400, 1400], 100)] };
-    for (const [paper, margin] of [['letter', '0.25in'], ['a4', '10mm']] as const) {
+  it('when a strap fills the sheet to its edges, or the belt preset prints with its labels, then no ink falls inside the margins', async () => {
+    const tall = { title: beltDrawing().title, pieces: [stripPiece('s', 'Tall strap', 1500, 120, [200, 400, 1400], 100)] };
+    const preset = revisionDrawing(presetSpec('belt'), {}, { patternName: 'Belt for Tobias Harrow', revision: 1, date: '2026-12-01' }).drawing;
+    for (const [paper, margin, d] of [['letter', '0.25in', tall], ['a4', '10mm', tall], ['letter', '6mm', preset]] as const) {
       const options = parsePrintOptions({ paper, margin });
       const plan = planTemplate(d, options);
-      const path = writeOut(`margins-${paper}.pdf`, await buildTemplatePdf({ drawing: d, options }));
+      const path = writeOut(`margins-${paper}-${margin}.pdf`, await buildTemplatePdf({ drawing: d, options }));
       const dpi = 150;
       const m = options.marginMm;
       for (const p of plan.pages) {
