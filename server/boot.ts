@@ -3,6 +3,7 @@ import type { Knex } from 'knex';
 import type { Config } from './config.ts';
 import { migrateLatest, openDb } from './db/connection.ts';
 import { migrationLevel } from './db/migration-level.ts';
+import { createAuthRepository } from './modules/auth/auth.repository.ts';
 import { listen, stopOnSignals, type RunningServer } from './index.ts';
 import { dirname, join } from 'node:path';
 import { DEMO_PASSWORD, DEMO_USERS, seed as seedShop } from '../db/seeds/01-demo-shop.ts';
@@ -16,6 +17,8 @@ export async function prepareDatabase(config: Config): Promise<Knex> {
   const db = openDb(config.databaseFile);
   const applied = await migrateLatest(db);
   const level = await migrationLevel(db);
+  // Sessions past their idle expiry are dead weight; lucia never sweeps them by itself.
+  await createAuthRepository(db).deleteExpiredSessions(Date.now());
   console.log(`database ${config.databaseFile}: ${applied.length} migration(s) applied now, level ${level.level} (${level.latest})`);
   if (config.env !== 'production') {
     await seedShop(db);

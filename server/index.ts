@@ -1,7 +1,8 @@
 // The server process: config, database, listen, and a graceful stop on SIGTERM/SIGINT.
 import type { Server } from 'node:http';
 import type { Knex } from 'knex';
-import { createApp, type AppDeps } from './app.ts';
+import { createApp, internalsOf, type AppDeps } from './app.ts';
+import { stopPrintWorker } from './modules/print/index.ts';
 import { ConfigError, loadConfig, type Config } from './config.ts';
 import { openDb } from './db/connection.ts';
 
@@ -42,6 +43,10 @@ export async function listen(config: Config, db: Knex = openDb(config.databaseFi
       const force = setTimeout(() => server.closeAllConnections(), 10_000);
       await closed;
       clearTimeout(force);
+      // Mail queued by the last requests leaves before the database closes; a print worker
+      // thread would otherwise keep the process alive.
+      await internalsOf(app).outbox.flush().catch((err: Error) => console.error(`mail on shutdown: ${err.message}`));
+      await stopPrintWorker();
       await db.destroy();
     })());
   return { server, db, config, url: `http://localhost:${port}`, stop };
