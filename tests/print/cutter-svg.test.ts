@@ -48,3 +48,21 @@ describe('cutter SVG', () => {
     expect(outlines.map((b) => +(b.maxX - b.minX).toFixed(3))).toEqual([120, 75]);
   });
 });
+
+describe('full-size SVG', () => {
+  it('when the collar preset is exported, then it is one sheet in physical units whose viewBox is in mm (W3C CSS: 1in = 25.4mm)', async () => {
+    const { presetSpec } = await import('@shared/pattern/index.ts');
+    const { printRevisionInline } = await import('../../server/modules/print/index.ts');
+    const f = await printRevisionInline(presetSpec('collar'), {}, { patternName: 'Collar for Juniper', revision: 1, date: '2026-12-01' }, 'svg');
+    expect(f.contentType).toBe('image/svg+xml');
+    expect(f.fileName).toBe('collar-for-juniper-r1.svg');
+    const svg = parse(f.body.toString('utf8')).documentElement;
+    const w = /^([\d.]+)mm$/.exec(svg.getAttribute('width') ?? '')?.[1];
+    const h = /^([\d.]+)mm$/.exec(svg.getAttribute('height') ?? '')?.[1];
+    const vb = (svg.getAttribute('viewBox') ?? '').split(/\s+/).map(Number);
+    expect(Number(w)).toBeCloseTo(vb[2] ?? NaN, 3);
+    expect(Number(h)).toBeCloseTo(vb[3] ?? NaN, 3);
+    // The sheet holds the whole 21 in (533.4 mm) blank.
+    expect(Number(w)).toBeGreaterThan(533.4);
+  });
+});

@@ -4,7 +4,10 @@ import { buildTemplatePdf, planTemplate } from '../../server/modules/print/templ
 import { parsePrintOptions } from '../../server/modules/print/print-options.ts';
 import type { Drawing } from '@shared/render/drawing.ts';
 import { collarDrawing, watchDrawing } from './fixtures.ts';
-import { darkSpan, renderCrop, writeOut } from './pdf-tools.ts';
+import { darkSpan, pageSizesPt, renderCrop, writeOut } from './pdf-tools.ts';
+import { presetSpec } from '@shared/pattern/index.ts';
+import { printRevisionInline } from '../../server/modules/print/index.ts';
+import { pageFrame } from '../../server/modules/print/page-frame.ts';
 
 const DPI = 1200;
 // A ruler's reading at 1200 dpi: 1 in = 1200 px; 25 mm = 25 / 25.4 x 1200 = 1181.10 px
@@ -38,6 +41,23 @@ describe('calibration squares measured at 1200 dpi with antialiasing off', () =>
       const want = EXPECTED_PX[r.square] ?? 0;
       expect(Math.abs(r.widthPx - want) / want).toBeLessThan(0.001);
       expect(Math.abs(r.heightPx - want) / want).toBeLessThan(0.001);
+    }
+  });
+
+  it('when the engine collar preset prints on Letter with its job sheet, then every page, the job sheet too, carries squares that read true within 0.1 %', async () => {
+    const options = parsePrintOptions({ paper: 'letter', jobSheet: true });
+    const f = await printRevisionInline(presetSpec('collar'), options, { patternName: 'Collar for Juniper', revision: 1, date: '2026-12-01' });
+    const path = writeOut('preset-collar-scale.pdf', f.body);
+    const sizes = await pageSizesPt(f.body);
+    for (const [i, s] of sizes.entries()) {
+      const landscape = s.width > s.height;
+      const band = pageFrame(options.sheet, landscape ? 'landscape' : 'portrait', options.marginMm).band;
+      squareBoxes(band).forEach((b, k) => {
+        const g = renderCrop(path, i + 1, DPI, { minX: b.minX - 1.5, maxX: b.maxX + 1.5, minY: b.minY - 1.5, maxY: b.maxY + 1.5 });
+        const row = darkSpan(g, 'row', Math.round(g.height / 2));
+        const want = EXPECTED_PX[k] ?? 0;
+        expect(Math.abs((row ? row.last - row.first + 1 : 0) - want) / want, `page ${i + 1} square ${k}`).toBeLessThan(0.001);
+      });
     }
   });
 

@@ -34,7 +34,7 @@ export function jobSheetFromLayout(layout: PatternLayout, opts: { edgeGuideMm?: 
     rivets: cl.fasteners
       .filter((f) => f.kind === 'rivet')
       .map((f) => ({ where: `${f.count} x through ${f.layers} layer${f.layers === 1 ? '' : 's'}`, stack: L(f.stackMm), post: f.postLengthMm !== undefined ? `${L(f.postLengthMm)} (stack + 2-3 mm, common practice)` : 'n/a' })),
-    punches: cl.punches.map((p) => ({ what: `${p.size} punch`, size: `${L(p.diameterMm)} (${formatLength(p.diameterMm, 'mm')})`, count: p.holes })),
+    punches: cl.punches.map((p) => ({ what: `${p.size} punch`, size: u === 'in' ? `${L(p.diameterMm)} (${formatLength(p.diameterMm, 'mm')})` : L(p.diameterMm), count: p.holes })),
     steps,
     cautions: cautionsFor(cautionKind(layout.kind)),
     warnings: layout.warnings.map((w) => w.message),

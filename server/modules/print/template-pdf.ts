@@ -6,6 +6,7 @@ import { fmtLength } from './format-length.ts';
 import { drawJobSheet, type JobSheet } from './job-sheet.ts';
 import { ROW, type PlanPiece } from './pack.ts';
 import { drawPagePlace } from './page-place.ts';
+import { FRAME, pageFrame } from './page-frame.ts';
 import { planPages, type PagePlan, type PlannedPage } from './page-plan.ts';
 import { addPageMm, createDoc, finishDoc } from './pdf-doc.ts';
 import { drawPlacement } from './pdf-draw.ts';
@@ -108,8 +109,12 @@ export async function buildTemplatePdf(input: TemplateInput): Promise<Buffer> {
     input.onProgress?.(page.number, total);
   }
   if (options.jobSheet && input.jobSheet) {
-    addPageMm(doc, options.sheet.widthMm, options.sheet.heightMm);
-    drawJobSheet(doc, input.jobSheet, t, { widthMm: options.sheet.widthMm, heightMm: options.sheet.heightMm, marginMm: options.marginMm });
+    // The job sheet is a portrait page of the same paper; it keeps the squares (every page
+    // carries them) and its text stops above them.
+    const jf = pageFrame(options.sheet, 'portrait', options.marginMm);
+    addPageMm(doc, jf.widthMm, jf.heightMm);
+    drawJobSheet(doc, input.jobSheet, t, { widthMm: jf.widthMm, heightMm: jf.band.minY - FRAME.gapMm + options.marginMm, marginMm: options.marginMm });
+    drawCalibration(doc, jf.band);
     input.onProgress?.(total, total);
   }
   return finishDoc(doc);
