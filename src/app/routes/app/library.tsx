@@ -1,11 +1,12 @@
 import { useCallback } from 'react';
-import { Link, useSearchParams, type LoaderFunction } from 'react-router-dom';
+import { Link, useNavigate, useSearchParams, type LoaderFunction } from 'react-router-dom';
 import { useSuspenseInfiniteQuery, useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
 import { can } from '@shared/schemas/permissions.ts';
 import { meQueryOptions } from '@/features/auth/api/queries.ts';
 import { filtersFromSearch } from '@/features/patterns/api/filters.ts';
 import { libraryQueryOptions, type LibraryFilters } from '@/features/patterns/api/queries.ts';
 import { LibraryFiltersBar } from '@/features/patterns/components/library/library-filters.tsx';
+import { ImportPattern } from '@/features/patterns/components/library/import-pattern.tsx';
 import { PatternCard } from '@/features/patterns/components/library/pattern-card.tsx';
 import { Button, buttonClass } from '@/components/ui/button.tsx';
 import { paths } from '../../paths.ts';
@@ -22,6 +23,7 @@ function toSearch(filters: LibraryFilters): URLSearchParams {
   if (filters.kind) q.set('kind', filters.kind);
   if (filters.tag) q.set('tag', filters.tag);
   if (filters.sort && filters.sort !== 'updated') q.set('sort', filters.sort);
+  if (filters.archived) q.set('archived', 'all');
   return q;
 }
 
@@ -29,6 +31,7 @@ function toSearch(filters: LibraryFilters): URLSearchParams {
 export function Component() {
   const { data: me } = useSuspenseQuery(meQueryOptions());
   const [params, setParams] = useSearchParams();
+  const navigate = useNavigate();
   const filters = filtersFromSearch(params);
   const list = useSuspenseInfiniteQuery(libraryQueryOptions(filters));
   const items = list.data.pages.flatMap((p) => p.items);
@@ -44,9 +47,12 @@ export function Component() {
           <h1 className="mt-1 text-3xl font-semibold tracking-tight text-hide-900">Pattern library</h1>
         </div>
         {mayCreate && (
-          <Link to={paths.patterns.new.getHref()} className={buttonClass('primary')}>
-            New pattern
-          </Link>
+          <div className="flex items-start gap-2">
+            <ImportPattern onImported={(id) => navigate(paths.patterns.detail.getHref(id))} />
+            <Link to={paths.patterns.new.getHref()} className={buttonClass('primary')}>
+              New pattern
+            </Link>
+          </div>
         )}
       </div>
       <LibraryFiltersBar filters={filters} onChange={onChange} />

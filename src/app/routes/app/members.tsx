@@ -7,6 +7,7 @@ import { MembersTable } from '@/features/shop/components/members-table.tsx';
 import { InviteForm } from '@/features/shop/components/invite-form.tsx';
 import { OpenInvites } from '@/features/shop/components/open-invites.tsx';
 import { Panel } from '@/components/ui/panel.tsx';
+import { NotificationSetting } from '@/features/settings/components/notification-setting.tsx';
 
 export const clientLoader = (queryClient: QueryClient): LoaderFunction => async () => {
   const me = await queryClient.ensureQueryData(meQueryOptions());
@@ -31,6 +32,9 @@ export function Component() {
         <h1 className="mt-1 text-3xl font-semibold tracking-tight text-hide-900">People in the shop</h1>
         <p className="mt-1 text-hide-700">Owners run the shop; makers draft and save; apprentices read the library and print.</p>
       </div>
+      <Panel title="Your mail">
+        <NotificationSetting />
+      </Panel>
       <Panel title={`Members (${members.items.length})`}>
         <MembersTable members={members.items} canManage={can(me.role, 'members.update')} selfId={me.user.id} />
       </Panel>

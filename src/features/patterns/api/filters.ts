@@ -12,5 +12,6 @@ export function filtersFromSearch(params: URLSearchParams): LibraryFilters {
   if (tag) filters.tag = tag;
   const sort = params.get('sort');
   filters.sort = sort === 'name' ? 'name' : 'updated';
+  if (params.get('archived') === 'all') filters.archived = true;
   return filters;
 }

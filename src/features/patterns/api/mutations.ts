@@ -95,3 +95,30 @@ export function useDuplicatePattern(id: number) {
     },
   });
 }
+
+/** `PUT`/`DELETE /api/patterns/:id/follow`: e-mail me each new revision of this pattern. */
+export function useFollowPattern(id: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (on: boolean) => apiRequest<{ following: boolean }>(`/api/patterns/${id}/follow`, { method: on ? 'PUT' : 'DELETE' }).then((r) => r.data),
+    onSuccess: ({ following }) => {
+      queryClient.setQueryData<PatternDetail>(patternKeys.detail(id), (old) => (old ? { ...old, pattern: { ...old.pattern, following } } : old));
+    },
+  });
+}
+
+/** `POST /api/patterns/import`: a pattern file (our own JSON format) as a multipart upload. */
+export function useImportPattern() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (file: File) => {
+      const body = new FormData();
+      body.append('file', file);
+      return withEtag(await apiRequest<PatternWithHead>('/api/patterns/import', { method: 'POST', body }));
+    },
+    onSuccess: async (created) => {
+      queryClient.setQueryData(patternKeys.detail(created.pattern.id), created);
+      await queryClient.invalidateQueries({ queryKey: patternKeys.lists() });
+    },
+  });
+}

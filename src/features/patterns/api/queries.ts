@@ -9,6 +9,8 @@ export interface LibraryFilters {
   kind?: PresetName;
   tag?: string;
   sort?: 'updated' | 'name';
+  /** Include archived patterns. */
+  archived?: boolean;
 }
 
 /** A pattern with its head, plus the head's strong ETag for `If-Match` on the next save. */
@@ -38,6 +40,7 @@ function listUrl(filters: LibraryFilters, cursor: string | null): string {
   if (filters.tag) q.set('tag', filters.tag);
   q.set('sort', filters.sort ?? 'updated');
   q.set('limit', String(PAGE_SIZE));
+  if (filters.archived) q.set('archived', 'all');
   if (cursor) q.set('cursor', cursor);
   return `/api/patterns?${q.toString()}`;
 }

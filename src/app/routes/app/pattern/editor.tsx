@@ -1,10 +1,12 @@
-import { useParams, type LoaderFunction } from 'react-router-dom';
+import { useNavigate, useParams, type LoaderFunction } from 'react-router-dom';
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
 import { can } from '@shared/schemas/permissions.ts';
 import { meQueryOptions } from '@/features/auth/api/queries.ts';
 import { patternQueryOptions } from '@/features/patterns/api/queries.ts';
 import { PatternHeader } from '@/features/patterns/components/pattern-header.tsx';
+import { PatternActions } from '@/features/patterns/components/pattern-actions.tsx';
 import { PatternEditor } from '@/features/patterns/components/editor/pattern-editor.tsx';
+import { paths } from '../../../paths.ts';
 import { idFromParams, patternTabs } from './pattern-tabs.ts';
 
 export const clientLoader = (queryClient: QueryClient): LoaderFunction => async ({ params }) => {
@@ -15,12 +17,18 @@ export const clientLoader = (queryClient: QueryClient): LoaderFunction => async 
 /** One pattern: its spec form beside the live preview, save, print. */
 export function Component() {
   const id = idFromParams(useParams().id);
+  const navigate = useNavigate();
   const { data: me } = useSuspenseQuery(meQueryOptions());
   const { data: detail } = useSuspenseQuery(patternQueryOptions(id));
   const canEdit = me ? can(me.role, 'revisions.create') : false;
   return (
     <div className="grid gap-6">
-      <PatternHeader pattern={detail.pattern} head={detail.head} tabs={patternTabs(id)} />
+      <PatternHeader
+        pattern={detail.pattern}
+        head={detail.head}
+        tabs={patternTabs(id)}
+        actions={<PatternActions pattern={detail.pattern} headNumber={detail.head.number} canEdit={canEdit} onDuplicated={(copy) => navigate(paths.patterns.detail.getHref(copy))} />}
+      />
       <PatternEditor key={id} detail={detail} canEdit={canEdit} canShare={me ? can(me.role, 'share.create') : false} />
     </div>
   );

@@ -1,6 +1,7 @@
 import { useEffect, useState } from 'react';
 import { PRESET_NAMES } from '@shared/schemas/strap-spec.ts';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
+import { CheckboxField } from '@/components/ui/checkbox-field.tsx';
 import { KIND_LABELS } from '../../kinds.ts';
 import type { LibraryFilters } from '../../api/queries.ts';
 
@@ -39,6 +40,12 @@ export function LibraryFiltersBar({ filters, onChange }: LibraryFiltersProps) {
         <option value="updated">Last saved</option>
         <option value="name">Name</option>
       </SelectField>
+      <CheckboxField
+        label="Show archived patterns"
+        checked={filters.archived ?? false}
+        onChange={(e) => onChange({ ...filters, archived: e.target.checked || undefined })}
+        wrapperClassName="sm:col-span-4"
+      />
     </form>
   );
 }
