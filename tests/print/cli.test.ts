@@ -23,6 +23,19 @@ describe('latchet print', () => {
     for (const s of sizes) expect([s.width, s.height].sort((a, b) => a - b)).toEqual([612, 792]);
   });
 
+  it('when a spec file is given with --spec and A4, then an A4 PDF is written (ISO 216: 595.28 x 841.89 pt)', async () => {
+    const { presetSpec } = await import('@shared/pattern/index.ts');
+    const spec = writeOut('cli-watch-spec.json', JSON.stringify(presetSpec('watch-strap')));
+    const out = join(OUT_DIR, 'cli-watch.pdf');
+    rmSync(out, { force: true });
+    const r = latchet('print', '--spec', spec, '--paper', 'a4', '--orientation', 'portrait', '--date', '2026-12-01', '-o', out);
+    expect(r.status, r.stderr).toBe(0);
+    for (const s of await pageSizesPt(readFileSync(out))) {
+      expect(s.width).toBeCloseTo(595.28, 2);
+      expect(s.height).toBeCloseTo(841.89, 2);
+    }
+  });
+
   it('when an option is bad, then it exits 2 naming the option and writes nothing', () => {
     const out = join(OUT_DIR, 'cli-bad.pdf');
     rmSync(out, { force: true });
