@@ -63,6 +63,9 @@ export interface PagePlan {
   seams: Seam[];
 }
 
+/** Most sheets one template may have: beyond this the paper is far too small for the job. */
+export const MAX_PAGES = 400;
+
 /** Geometry of pieces too big for the chosen paper, or options that leave no room. */
 export class PagePlanError extends Error {
   constructor(
@@ -153,6 +156,9 @@ export function planPagesIn(
   for (const [pageIndex, placements] of shelves.into) pages[pageIndex]?.placements.push(...placements);
   for (const placements of shelves.pages) {
     pages.push({ number: pages.length + 1, placements });
+  }
+  if (pages.length > MAX_PAGES) {
+    throw new PagePlanError('paper', `paper: ${sheet.label} ${orientation} would need ${pages.length} sheets; at most ${MAX_PAGES}: choose larger paper or fewer sizes`);
   }
   return { frame, overlapMm, pages, runs, seams };
 }
