@@ -21,6 +21,8 @@ export function drawSeamMarks(doc: PDFKit.PDFDocument, page: PlannedPage, seam: 
   doc.save();
   for (const pl of page.placements) {
     if (!pl.tile) continue; // a small piece packed under the run is not part of the seam
+    // A shorter piece of the run may end before this seam: nothing of it to join there.
+    if (pl.toXMm <= seam.overlapFromMm || pl.fromXMm >= seam.overlapToMm) continue;
     const x = seam.markXMm + pl.offsetXMm;
     // Letters sit beside the diamonds; keep their cap height inside the row (and the area).
     const top = pl.clip.minY + 2.6;
