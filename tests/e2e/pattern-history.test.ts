@@ -1,5 +1,6 @@
 // End-to-end: history, compare, restore, a save that loses the race (412), and share links,
 // in Chromium against the real server with a fresh database.
+import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { presetSpec } from '@shared/pattern/presets/index.ts';
@@ -130,5 +131,67 @@ describe('pattern history and sharing in the browser', () => {
     } finally {
       await stranger.close();
     }
+  });
+
+  it('when the template PDF is downloaded, then the file is a PDF (ISO 32000 header) named after the pattern', async () => {
+    await page.goto(`${server.url}/patterns/${id}`);
+    await page.getByRole('link', { name: 'Template PDF' }).waitFor();
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Template PDF' }).click()]);
+    const path = await download.path();
+    const head = readFileSync(path).subarray(0, 5).toString('latin1');
+    expect(head).toBe('%PDF-');
+    expect(download.suggestedFilename()).toMatch(/belt.*\.pdf$/i);
+  });
+
+  it('when the maker renames and tags the pattern, then the header shows the new name and tag without a new revision', async () => {
+    await page.getByRole('button', { name: 'Name and tags' }).click();
+    const form = page.getByRole('form', { name: 'Name and tags' });
+    await form.getByLabel('Pattern name').fill('Casual belt, Tobias');
+    await form.getByLabel('Tags').fill('belts, bridle');
+    await form.getByRole('button', { name: 'Save name and tags' }).click();
+    await page.getByRole('heading', { name: 'Casual belt, Tobias' }).waitFor();
+    await page.getByText('bridle', { exact: true }).first().waitFor();
+    await expect(page.getByTestId('head-revision').textContent()).resolves.toContain('Revision 5');
+    await snap(page, 'history-08-renamed');
+  });
+
+  it('when the pattern is exported and the file imported again, then a second pattern with the same history opens', async () => {
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Export file' }).click()]);
+    const file = await download.path();
+    await page.getByRole('link', { name: 'Library' }).click();
+    await page.getByTestId('pattern-list').waitFor();
+    await page.getByLabel('Pattern file to import').setInputFiles(file);
+    await page.getByRole('heading', { name: 'Casual belt, Tobias' }).waitFor();
+    expect(page.url()).not.toBe(`${server.url}/patterns/${id}`);
+    await page.getByRole('link', { name: 'History' }).click();
+    await page.getByTestId('revision-list').waitFor();
+    await expect(page.getByTestId('revision-list').getByTestId('revision-link').count()).resolves.toBe(5);
+  });
+
+  it('when a file that is not a pattern is imported, then the library names what is wrong and adds nothing', async () => {
+    await page.getByRole('link', { name: 'Library' }).click();
+    await page.getByTestId('pattern-list').waitFor();
+    const before = await page.getByTestId('pattern-list').getByRole('link').count();
+    await page.getByLabel('Pattern file to import').setInputFiles({ name: 'notes.json', mimeType: 'application/json', buffer: Buffer.from('{"hello":"world"}') });
+    await page.getByText('The file was not imported').waitFor();
+    await snap(page, 'history-09-import-refused');
+    await page.reload();
+    await page.getByTestId('pattern-list').waitFor();
+    await expect(page.getByTestId('pattern-list').getByRole('link').count()).resolves.toBe(before);
+  });
+
+  it('when the pattern is archived, then the library hides it until archived patterns are shown', async () => {
+    await page.goto(`${server.url}/patterns/${id}`);
+    await page.getByRole('button', { name: 'Archive' }).click();
+    await page.getByRole('button', { name: 'Bring back' }).waitFor();
+    await page.getByRole('link', { name: 'Library' }).click();
+    await page.getByTestId('pattern-list').waitFor();
+    const names = () => page.getByTestId('pattern-list').getByRole('link').allTextContents();
+    // The imported copy stays; the archived original is hidden.
+    await expect(names()).resolves.toEqual(['Casual belt, Tobias']);
+    await page.getByLabel('Show archived patterns').check();
+    await page.waitForURL(/archived=all/);
+    await expect.poll(names, { timeout: 5000 }).toEqual(['Casual belt, Tobias', 'Casual belt, Tobias']);
+    await snap(page, 'history-10-archived-shown');
   });
 });

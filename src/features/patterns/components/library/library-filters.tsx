@@ -10,24 +10,40 @@ export interface LibraryFiltersProps {
   onChange: (next: LibraryFilters) => void;
 }
 
-/** Search, kind, tag and sort; search waits for a pause in typing before it asks the server. */
+const norm = (f: LibraryFilters): LibraryFilters => ({ ...f, query: f.query?.trim() || undefined, tag: f.tag?.trim().toLowerCase() || undefined });
+const same = (x: LibraryFilters, y: LibraryFilters) => {
+  const a = norm(x);
+  const b = norm(y);
+  return (a.query ?? '') === (b.query ?? '') && a.kind === b.kind && (a.tag ?? '') === (b.tag ?? '') && (a.sort ?? 'updated') === (b.sort ?? 'updated') && Boolean(a.archived) === Boolean(b.archived);
+};
+
+/**
+ * Search, kind, tag, sort and archived. The controls answer at once (the address follows
+ * when the new page of results has loaded); typing waits for a pause before it asks.
+ */
 export function LibraryFiltersBar({ filters, onChange }: LibraryFiltersProps) {
-  const [query, setQuery] = useState(filters.query ?? '');
-  const [tag, setTag] = useState(filters.tag ?? '');
+  const [draft, setDraft] = useState<LibraryFilters>(filters);
+
+  // Back and forward change the address: follow it.
+  useEffect(() => {
+    setDraft((d) => (same(d, filters) ? d : filters));
+    // Listed by value: `filters` is a new object on every render.
+  }, [filters.query, filters.kind, filters.tag, filters.sort, filters.archived]);
 
   useEffect(() => {
-    const t = setTimeout(() => {
-      if ((filters.query ?? '') !== query.trim() || (filters.tag ?? '') !== tag.trim().toLowerCase()) {
-        onChange({ ...filters, query: query.trim() || undefined, tag: tag.trim().toLowerCase() || undefined });
-      }
-    }, 300);
+    const next = norm(draft);
+    if (same(next, filters)) return;
+    const typed = (next.query ?? '') !== (filters.query ?? '') || (next.tag ?? '') !== (filters.tag ?? '');
+    const t = setTimeout(() => onChange(next), typed ? 300 : 0);
     return () => clearTimeout(t);
-  }, [query, tag, filters, onChange]);
+  }, [draft, filters, onChange]);
+
+  const set = (patch: Partial<LibraryFilters>) => setDraft((d) => ({ ...d, ...patch }));
 
   return (
     <form role="search" aria-label="Filter the library" className="grid gap-3 sm:grid-cols-[2fr_1fr_1fr_1fr]" onSubmit={(e) => e.preventDefault()}>
-      <TextField label="Search names" type="search" value={query} onChange={(e) => setQuery(e.target.value)} placeholder="Juniper, bridle, 1 in…" />
-      <SelectField label="Kind" value={filters.kind ?? ''} onChange={(e) => onChange({ ...filters, kind: (e.target.value || undefined) as LibraryFilters['kind'] })}>
+      <TextField label="Search names" type="search" value={draft.query ?? ''} onChange={(e) => set({ query: e.target.value })} placeholder="Juniper, bridle, 1 in…" />
+      <SelectField label="Kind" value={draft.kind ?? ''} onChange={(e) => set({ kind: (e.target.value || undefined) as LibraryFilters['kind'] })}>
         <option value="">All kinds</option>
         {PRESET_NAMES.map((k) => (
           <option key={k} value={k}>
@@ -35,15 +51,15 @@ export function LibraryFiltersBar({ filters, onChange }: LibraryFiltersProps) {
           </option>
         ))}
       </SelectField>
-      <TextField label="Tag" value={tag} onChange={(e) => setTag(e.target.value)} placeholder="e.g. dogs" />
-      <SelectField label="Sort by" value={filters.sort ?? 'updated'} onChange={(e) => onChange({ ...filters, sort: e.target.value as 'updated' | 'name' })}>
+      <TextField label="Tag" value={draft.tag ?? ''} onChange={(e) => set({ tag: e.target.value })} placeholder="e.g. dogs" />
+      <SelectField label="Sort by" value={draft.sort ?? 'updated'} onChange={(e) => set({ sort: e.target.value as 'updated' | 'name' })}>
         <option value="updated">Last saved</option>
         <option value="name">Name</option>
       </SelectField>
       <CheckboxField
         label="Show archived patterns"
-        checked={filters.archived ?? false}
-        onChange={(e) => onChange({ ...filters, archived: e.target.checked || undefined })}
+        checked={draft.archived ?? false}
+        onChange={(e) => set({ archived: e.target.checked || undefined })}
         wrapperClassName="sm:col-span-4"
       />
     </form>
