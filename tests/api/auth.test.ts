@@ -130,6 +130,22 @@ describe('sign-in and sign-out', () => {
   });
 });
 
+describe('sign-up rate limit', () => {
+  it('when sign-ups keep failing past AUTH_RATE_LIMIT, then the next one gets 429', async () => {
+    const small = await createTestApp({ env: { AUTH_RATE_LIMIT: '2' } });
+    try {
+      const body = signUpBody();
+      await request(small.app).post('/api/auth/sign-up').send(body).expect(201);
+      await request(small.app).post('/api/auth/sign-up').send(body).expect(409);
+      await request(small.app).post('/api/auth/sign-up').send({ ...body, email: 'bad' }).expect(400);
+      const res = await request(small.app).post('/api/auth/sign-up').send(signUpBody()).expect(429);
+      expect(res.body.error.code).toBe('rate_limited');
+    } finally {
+      await small.close();
+    }
+  });
+});
+
 describe('cross-site requests', () => {
   it('when a POST carries a foreign Origin, then it gets 403 and nothing is created', async () => {
     const res = await request(t.app).post('/api/auth/sign-up').set('Origin', 'https://evil.example').send(signUpBody()).expect(403);
