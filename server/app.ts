@@ -10,6 +10,7 @@ import { originCheck } from './http/origin-check.ts';
 import { createLucia, sessionMiddleware } from './http/session.ts';
 import { serveClient } from './http/static-client.ts';
 import { authRoutes } from './modules/auth/auth.routes.ts';
+import { shopsRoutes } from './modules/auth/shops.routes.ts';
 import { createAuthService } from './modules/auth/auth.service.ts';
 import { healthRoutes } from './modules/health/health.routes.ts';
 import { createRepositories, type LibraryDeps } from './modules/library-deps.ts';
@@ -105,6 +106,7 @@ export function createApp({ db, config, clientDir = CLIENT_DIR, log, mail }: App
   });
   api.use(healthRoutes(db));
   api.use(authRoutes(authService, lucia, config));
+  api.use(shopsRoutes(authRepo, authService, lucia));
   const revisions = createRevisionsService(deps);
   const patterns = createPatternsService(deps);
   // Import first: '/patterns/import' must not be read as '/patterns/:id'.

@@ -77,6 +77,9 @@ export const CreateInviteSchema = z.object({ email: EmailSchema, role: RoleSchem
  */
 export const AcceptInviteSchema = z.object({ name: PersonNameSchema.optional(), password: NewPasswordSchema.optional() });
 
+/** `POST /api/me/shop`: act for another shop the user belongs to (a new session). */
+export const SwitchShopSchema = z.object({ shopId: intParam('shopId', 1) });
+
 /** `PATCH /api/me/settings`. */
 export const SettingsSchema = z.object({ notifyOnFollowedRevisions: z.boolean({ error: 'notifyOnFollowedRevisions must be true or false' }) });
 export type Settings = z.infer<typeof SettingsSchema>;

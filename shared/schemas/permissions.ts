@@ -55,6 +55,8 @@ export const PERMISSIONS = {
   'invites.revoke': { method: 'DELETE', path: '/shop/invites/:inviteId', actors: OWNER },
   'invites.view': { method: 'GET', path: '/invites/:token', actors: PUBLIC },
   'invites.accept': { method: 'POST', path: '/invites/:token/accept', actors: PUBLIC },
+  'shops.list': { method: 'GET', path: '/me/shops', actors: ALL },
+  'shops.switch': { method: 'POST', path: '/me/shop', actors: ALL },
   'settings.read': { method: 'GET', path: '/me/settings', actors: ALL },
   'settings.update': { method: 'PATCH', path: '/me/settings', actors: ALL },
   'devmail.read': { method: 'GET', path: '/dev/mail', actors: OWNER },

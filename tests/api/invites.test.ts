@@ -73,6 +73,22 @@ describe('invites', () => {
     expect(res.body).toMatchObject({ shop: { id: w.shopId }, role: 'maker' });
   });
 
+  it('when a member of two shops signs in, then they land in the first and can switch to the other', async () => {
+    const { token } = await invite(w.outsider.email, 'maker');
+    await request(t.app).post(`/api/invites/${token}/accept`).send({ password: WORLD_PASSWORD }).expect(200);
+    const signIn = await request(t.app).post('/api/auth/sign-in').send({ email: w.outsider.email, password: WORLD_PASSWORD }).expect(200);
+    expect(signIn.body.shop.name).toBe('Bosun Tack Co.');
+    const cookie = sessionCookieOf(signIn.headers['set-cookie']);
+    const shops = await request(t.app).get('/api/me/shops').set('Cookie', cookie).expect(200);
+    expect(shops.body.items.map((s: { name: string; role: string }) => [s.name, s.role])).toEqual([['Bosun Tack Co.', 'owner'], ['Harrow & Finch Leatherworks', 'maker']]);
+    const switched = await request(t.app).post('/api/me/shop').set('Cookie', cookie).send({ shopId: w.shopId }).expect(200);
+    expect(switched.body).toMatchObject({ shop: { id: w.shopId }, role: 'maker' });
+    await request(t.app).get('/api/me').set('Cookie', cookie).expect(401);
+    const next = sessionCookieOf(switched.headers['set-cookie']);
+    await request(t.app).get(`/api/patterns/${w.collar.pattern.id}`).set('Cookie', next).expect(200);
+    await request(t.app).post('/api/me/shop').set('Cookie', next).send({ shopId: 9999 }).expect(404);
+  });
+
   it('when a signed-in member of another address opens the link, then 403 and the invite stays usable', async () => {
     const { token } = await invite('pip@harrowfinch.example');
     const res = await request(t.app).post(`/api/invites/${token}/accept`).set('Cookie', w.maker.cookie).expect(403);

@@ -109,6 +109,10 @@ const SAMPLES: Record<Action, { scope: Scope; make: (c: Ctx) => Promise<Sample> 
       return { path: `/api/invites/${await inviteRow(t, w.shopId, `anon-${randomBytes(4).toString('hex')}@x.example`)}/accept`, body: { name: 'Wren Adler', password: 'waxed-thread-44' } };
     },
   },
+  'shops.list': { scope: 'shop', make: async () => ({ path: '/api/me/shops' }) },
+  // Switching to the shop one acts for already is allowed (it starts a new session; each
+  // actor calls once per world, so the ended session is not needed again).
+  'shops.switch': { scope: 'shop', make: async ({ me }) => ({ path: '/api/me/shop', body: { shopId: me?.shopId ?? 1 } }) },
   'settings.read': { scope: 'shop', make: async () => ({ path: '/api/me/settings' }) },
   'settings.update': { scope: 'shop', make: async () => ({ path: '/api/me/settings', body: { notifyOnFollowedRevisions: false } }) },
   'devmail.read': { scope: 'shop', make: async () => ({ path: '/api/dev/mail' }) },

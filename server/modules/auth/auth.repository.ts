@@ -57,6 +57,14 @@ export function createAuthRepository(db: Knex) {
         .first<{ shopId: number; shopName: string; role: Role } | undefined>('s.id as shopId', 's.name as shopName', 'm.role as role');
     },
 
+    /** Every shop the user belongs to, in joining order. */
+    memberships: (userId: number) =>
+      db('memberships as m')
+        .join('shops as s', 's.id', 'm.shop_id')
+        .where({ 'm.user_id': userId })
+        .orderBy([{ column: 'm.created_at' }, { column: 'm.shop_id' }])
+        .select<MembershipView[]>('s.id as shopId', 's.name as shopName', 'm.role as role'),
+
     sessionWithUser: (id: string) =>
       db('sessions as s')
         .join('users as u', 'u.id', 's.user_id')
