@@ -79,6 +79,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     throw new ConfigError(parsed.error.issues.map((i) => `${i.path.join('.') || 'environment'}: ${i.message}`));
   }
   const e = parsed.data;
+  // Links in mail must reach the real site; localhost would send invitees nowhere.
+  if (e.NODE_ENV === 'production' && !e.PUBLIC_ORIGIN) {
+    throw new ConfigError(['PUBLIC_ORIGIN: required in production, e.g. https://patterns.harrowfinch.example']);
+  }
   return {
     env: e.NODE_ENV,
     port: e.PORT,

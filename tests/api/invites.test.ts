@@ -179,7 +179,7 @@ describe('notifications and the dev mailbox', () => {
   });
 
   it('when the app runs in production, then the dev mailbox does not exist', async () => {
-    const prod = await createTestApp({ env: { NODE_ENV: 'production' } });
+    const prod = await createTestApp({ env: { NODE_ENV: 'production', PUBLIC_ORIGIN: 'https://patterns.harrowfinch.example' } });
     try {
       const pw = await buildWorld(prod);
       await request(prod.app).get('/api/dev/mail').set('Cookie', pw.owner.cookie).expect(404);
