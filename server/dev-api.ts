@@ -4,4 +4,4 @@ import { boot } from './boot.ts';
 
 const config = configOrExit();
 const running = await boot(config);
-console.log(`API listening on ${running.url}; ${running.mailNote} (mailbox at /dev/mail)`);
+console.log(`API listening on ${running.url}; ${running.mailNote} (owners read it at ${running.url}/dev/mail)`);
