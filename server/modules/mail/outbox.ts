@@ -7,6 +7,8 @@ import { createMailRepository, type OutgoingMail } from './mail.repository.ts';
 
 /** Delivery attempts before a message is marked failed. */
 export const MAX_ATTEMPTS = 3;
+/** Wait before retrying when a whole batch failed, ms. */
+export const RETRY_AFTER_MS = 30_000;
 
 export interface Outbox {
   /** Queue `mail` inside the caller's transaction `trx`; returns the row id. */
@@ -55,9 +57,23 @@ export function createOutbox(db: Knex, transport: Transporter, from: string, log
           log(`mail ${row.id} to ${row.to_email} ${giveUp ? 'failed' : 'will be retried'}: ${(err as Error).message}`);
         }
       }
-      if (!progressed && batch.every((r) => r.attempts + 1 >= MAX_ATTEMPTS)) return;
-      if (!progressed) return; // retry on the next kick rather than spinning
+      if (!progressed) {
+        // Nothing went out (the server is down?): try again later instead of spinning.
+        scheduleRetry();
+        return;
+      }
     }
+  }
+
+  let retry: NodeJS.Timeout | undefined;
+  function scheduleRetry(): void {
+    if (retry) return;
+    retry = setTimeout(() => {
+      retry = undefined;
+      flush().catch((err: Error) => log(`mail retry: ${err.message}`));
+    }, RETRY_AFTER_MS);
+    // A pending retry must not keep a stopping process alive.
+    retry.unref();
   }
 
   function flush(): Promise<void> {
