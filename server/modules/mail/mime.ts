@@ -75,7 +75,8 @@ export function parseMail(raw: string): ParsedMail {
     subject: decodeHeader(headers.get('subject') ?? ''),
     from: decodeHeader(headers.get('from') ?? ''),
     to: decodeHeader(headers.get('to') ?? ''),
-    text: out.text.trimEnd(),
-    html: out.html.trimEnd(),
+    // SMTP lines end in CRLF (RFC 5321); readers of the mailbox want plain newlines.
+    text: out.text.replace(/\r\n/g, '\n').trimEnd(),
+    html: out.html.replace(/\r\n/g, '\n').trimEnd(),
   };
 }
