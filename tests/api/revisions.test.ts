@@ -111,6 +111,19 @@ describe('history', () => {
     expect(list.body.items[0]).not.toHaveProperty('spec');
   });
 
+  it('when a pattern is created, saved, restored and renamed, then its activity lists each step with who did it, newest first', async () => {
+    const r2 = await request(t.app).post(`${path()}/revisions`).set('Cookie', w.maker.cookie).set('If-Match', w.collar.etag).send({ spec: collarWithGirth(340) }).expect(201);
+    await request(t.app).post(`${path()}/revisions/1/restore`).set('Cookie', w.owner.cookie).set('If-Match', String(r2.headers.etag)).expect(201);
+    await request(t.app).patch(path()).set('Cookie', w.owner.cookie).send({ name: "Juniper's everyday collar" }).expect(200);
+    const res = await request(t.app).get(`${path()}/activity`).set('Cookie', w.apprentice.cookie).expect(200);
+    expect(res.body.items.map((e: { action: string; by: { name: string } }) => [e.action, e.by.name])).toEqual([
+      ['pattern.updated', 'Maren Finch'],
+      ['revision.restored', 'Maren Finch'],
+      ['revision.saved', 'Tobias Harrow'],
+      ['pattern.created', 'Tobias Harrow'],
+    ]);
+  });
+
   it('when the database is asked to change or delete a revision, then the triggers refuse', async () => {
     await expect(t.db('revisions').where({ pattern_id: w.collar.pattern.id }).update({ note: 'rewritten' })).rejects.toThrow(/immutable/);
     await expect(t.db('revisions').where({ pattern_id: w.collar.pattern.id }).delete()).rejects.toThrow(/immutable/);
