@@ -109,4 +109,15 @@ describe('accounts in the browser', () => {
     await page.getByRole('heading', { name: 'Nothing cut to this shape' }).waitFor();
     await snap(page, 'auth-07-not-found');
   });
+
+  it('when a signed-out visitor opens a signed-in address, then sign-in asks first and returns them to it', async () => {
+    await page.goto(server.url + '/shop/members');
+    await page.getByRole('heading', { name: 'Sign in to your shop' }).waitFor();
+    expect(new URL(page.url()).searchParams.get('redirectTo')).toBe('/shop/members');
+    await page.getByLabel('E-mail').fill(owner.email);
+    await page.getByLabel('Password').fill(owner.password);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByRole('heading', { name: 'People in the shop' }).waitFor();
+    expect(new URL(page.url()).pathname).toBe('/shop/members');
+  });
 });

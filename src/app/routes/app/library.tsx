@@ -3,15 +3,17 @@ import { Link, useNavigate, useSearchParams, type LoaderFunction } from 'react-r
 import { useSuspenseInfiniteQuery, useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
 import { can } from '@shared/schemas/permissions.ts';
 import { meQueryOptions } from '@/features/auth/api/queries.ts';
+import { isSignedIn } from '@/features/auth/api/signed-in.ts';
 import { filtersFromSearch } from '@/features/patterns/api/filters.ts';
 import { libraryQueryOptions, type LibraryFilters } from '@/features/patterns/api/queries.ts';
 import { LibraryFiltersBar } from '@/features/patterns/components/library/library-filters.tsx';
-import { ImportPattern } from '@/features/patterns/components/library/import-pattern.tsx';
+import { useImportPatternControl } from '@/features/patterns/components/library/import-pattern.tsx';
 import { PatternCard } from '@/features/patterns/components/library/pattern-card.tsx';
 import { Button, buttonClass } from '@/components/ui/button.tsx';
 import { paths } from '../../paths.ts';
 
 export const clientLoader = (queryClient: QueryClient): LoaderFunction => async ({ request }) => {
+  if (!(await isSignedIn(queryClient))) return null;
   const filters = filtersFromSearch(new URL(request.url).searchParams);
   await queryClient.ensureInfiniteQueryData(libraryQueryOptions(filters));
   return null;
@@ -32,6 +34,7 @@ export function Component() {
   const { data: me } = useSuspenseQuery(meQueryOptions());
   const [params, setParams] = useSearchParams();
   const navigate = useNavigate();
+  const importer = useImportPatternControl((id) => navigate(paths.patterns.detail.getHref(id)));
   const filters = filtersFromSearch(params);
   const list = useSuspenseInfiniteQuery(libraryQueryOptions(filters));
   const items = list.data.pages.flatMap((p) => p.items);
@@ -48,13 +51,14 @@ export function Component() {
         </div>
         {mayCreate && (
           <div className="flex items-start gap-2">
-            <ImportPattern onImported={(id) => navigate(paths.patterns.detail.getHref(id))} />
+            {importer.button}
             <Link to={paths.patterns.new.getHref()} className={buttonClass('primary')}>
               New pattern
             </Link>
           </div>
         )}
       </div>
+      {importer.notice}
       <LibraryFiltersBar filters={filters} onChange={onChange} />
       {items.length === 0 ? (
         <div className="stitched rounded-lg bg-hide-50 px-6 py-12 text-center">

@@ -11,9 +11,11 @@ import { NotificationSetting } from '@/features/settings/components/notification
 
 export const clientLoader = (queryClient: QueryClient): LoaderFunction => async () => {
   const me = await queryClient.ensureQueryData(meQueryOptions());
+  // Child loaders run beside the layout's: signed out, fetch nothing (the layout redirects).
+  if (!me) return null;
   await Promise.all([
     queryClient.ensureQueryData(membersQueryOptions()),
-    me && can(me.role, 'invites.list') ? queryClient.ensureQueryData(invitesQueryOptions()) : null,
+    can(me.role, 'invites.list') ? queryClient.ensureQueryData(invitesQueryOptions()) : null,
   ]);
   return null;
 };

@@ -1,4 +1,5 @@
 import { useNavigate, useParams, useSearchParams, type LoaderFunction } from 'react-router-dom';
+import { isSignedIn } from '@/features/auth/api/signed-in.ts';
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
 import { patternQueryOptions, revisionsQueryOptions } from '@/features/patterns/api/queries.ts';
 import { compareQueryOptions } from '@/features/patterns/api/compare.ts';
@@ -17,6 +18,7 @@ function pair(search: URLSearchParams): { from: number; to: number } {
 }
 
 export const clientLoader = (queryClient: QueryClient): LoaderFunction => async ({ params, request }) => {
+  if (!(await isSignedIn(queryClient))) return null;
   const id = idFromParams(params.id);
   const { from, to } = pair(new URL(request.url).searchParams);
   await Promise.all([

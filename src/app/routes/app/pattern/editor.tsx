@@ -2,6 +2,7 @@ import { useNavigate, useParams, type LoaderFunction } from 'react-router-dom';
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
 import { can } from '@shared/schemas/permissions.ts';
 import { meQueryOptions } from '@/features/auth/api/queries.ts';
+import { isSignedIn } from '@/features/auth/api/signed-in.ts';
 import { patternQueryOptions } from '@/features/patterns/api/queries.ts';
 import { PatternHeader } from '@/features/patterns/components/pattern-header.tsx';
 import { PatternActions } from '@/features/patterns/components/pattern-actions.tsx';
@@ -10,6 +11,7 @@ import { paths } from '../../../paths.ts';
 import { idFromParams, patternTabs } from './pattern-tabs.ts';
 
 export const clientLoader = (queryClient: QueryClient): LoaderFunction => async ({ params }) => {
+  if (!(await isSignedIn(queryClient))) return null;
   await queryClient.ensureQueryData(patternQueryOptions(idFromParams(params.id)));
   return null;
 };

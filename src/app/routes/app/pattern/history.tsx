@@ -3,6 +3,7 @@ import { useNavigate, useParams, type LoaderFunction } from 'react-router-dom';
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
 import { can } from '@shared/schemas/permissions.ts';
 import { meQueryOptions } from '@/features/auth/api/queries.ts';
+import { isSignedIn } from '@/features/auth/api/signed-in.ts';
 import { patternQueryOptions, revisionsQueryOptions } from '@/features/patterns/api/queries.ts';
 import { useRestoreRevision } from '@/features/patterns/api/mutations.ts';
 import { PatternHeader } from '@/features/patterns/components/pattern-header.tsx';
@@ -15,6 +16,7 @@ import { paths } from '../../../paths.ts';
 import { idFromParams, patternTabs } from './pattern-tabs.ts';
 
 export const clientLoader = (queryClient: QueryClient): LoaderFunction => async ({ params }) => {
+  if (!(await isSignedIn(queryClient))) return null;
   const id = idFromParams(params.id);
   await Promise.all([queryClient.ensureQueryData(patternQueryOptions(id)), queryClient.ensureQueryData(revisionsQueryOptions(id))]);
   return null;

@@ -1,4 +1,5 @@
 import { Link, useParams, type LoaderFunction } from 'react-router-dom';
+import { isSignedIn } from '@/features/auth/api/signed-in.ts';
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
 import { patternQueryOptions, revisionQueryOptions } from '@/features/patterns/api/queries.ts';
 import { PatternHeader } from '@/features/patterns/components/pattern-header.tsx';
@@ -16,6 +17,7 @@ function numberFromParams(raw: string | undefined): number {
 }
 
 export const clientLoader = (queryClient: QueryClient): LoaderFunction => async ({ params }) => {
+  if (!(await isSignedIn(queryClient))) return null;
   const id = idFromParams(params.id);
   const n = numberFromParams(params.n);
   await Promise.all([queryClient.ensureQueryData(patternQueryOptions(id)), queryClient.ensureQueryData(revisionQueryOptions(id, n))]);

@@ -4,8 +4,12 @@ import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { useImportPattern } from '../../api/mutations.ts';
 
-/** Brings in a pattern file exported from Latchet; every problem in the file is named, nothing half-imported. */
-export function ImportPattern({ onImported }: { onImported: (id: number) => void }) {
+/**
+ * Brings in a pattern file exported from Latchet. Returns the button and, after a refused
+ * file, the list of what is wrong (every field named; nothing is half-imported), so the
+ * screen can place each where it reads best.
+ */
+export function useImportPatternControl(onImported: (id: number) => void) {
   const input = useRef<HTMLInputElement>(null);
   const importer = useImportPattern();
   const [problems, setProblems] = useState<string[]>([]);
@@ -22,21 +26,23 @@ export function ImportPattern({ onImported }: { onImported: (id: number) => void
     });
   };
 
-  return (
-    <div className="grid justify-items-end gap-2">
-      <input ref={input} type="file" accept=".json,application/json" className="sr-only" id="import-pattern-file" aria-label="Pattern file to import" onChange={(e) => onFile(e.target.files?.[0])} />
+  const button = (
+    <>
+      <input ref={input} type="file" accept=".json,application/json" className="sr-only" aria-label="Pattern file to import" onChange={(e) => onFile(e.target.files?.[0])} />
       <Button variant="secondary" busy={importer.isPending} onClick={() => input.current?.click()}>
         Import file
       </Button>
-      {problems.length > 0 && (
-        <Notice tone="danger" role="alert" title="The file was not imported">
-          <ul className="list-disc pl-5">
-            {problems.map((p) => (
-              <li key={p}>{p}</li>
-            ))}
-          </ul>
-        </Notice>
-      )}
-    </div>
+    </>
   );
+  const notice =
+    problems.length > 0 ? (
+      <Notice tone="danger" role="alert" title="The file was not imported">
+        <ul className="list-disc pl-5">
+          {problems.map((p) => (
+            <li key={p}>{p}</li>
+          ))}
+        </ul>
+      </Notice>
+    ) : null;
+  return { button, notice };
 }
