@@ -172,4 +172,21 @@ describe('the pattern library in the browser', () => {
     }, '/api' + new URL(patternUrl).pathname);
     expect(status).toBe(403);
   });
+
+  it('when the owner makes the apprentice a maker, then after a reload the apprentice can edit the spec', async () => {
+    await page.goto(server.url + '/shop/members');
+    await page.getByLabel(`Role of ${apprentice.name}`).selectOption('maker');
+    await expect.poll(() => page.getByLabel(`Role of ${apprentice.name}`).inputValue()).toBe('maker');
+    await otherPage.reload();
+    await otherPage.getByTestId('drawing-preview').locator('svg').waitFor();
+    await expect.poll(() => otherPage.getByLabel('Girth').isDisabled()).toBe(false);
+    await otherPage.getByRole('button', { name: /Save revision/ }).waitFor();
+  });
+
+  it('when the only owner tries to step down, then the server refuses and the table says why', async () => {
+    await page.getByLabel(`Role of ${owner.name}`).selectOption('maker');
+    await page.getByText('A shop needs at least one owner').waitFor();
+    await expect.poll(() => page.getByLabel(`Role of ${owner.name}`).inputValue()).toBe('owner');
+    await snap(page, 'library-12-last-owner');
+  });
 });
