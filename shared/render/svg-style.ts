@@ -1,8 +1,11 @@
 import type { LayerName } from './drawing.ts';
 
-/** A number as SVG text: 3 fixed decimals (0.001 mm), never "-0.000". */
+/**
+ * A number as SVG text: 3 fixed decimals (0.001 mm), never "-0.000". Halves round away from
+ * zero so an outline symmetric about the centreline stays symmetric in the file.
+ */
 export function svgNumber(v: number): string {
-  const s = (Math.round(v * 1000) / 1000).toFixed(3);
+  const s = ((Math.sign(v) * Math.round(Math.abs(v) * 1000)) / 1000).toFixed(3);
   return s === '-0.000' ? '0.000' : s;
 }
 

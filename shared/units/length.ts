@@ -13,9 +13,13 @@ export const MM_PER_IN = 25.4;
  */
 export const MM_PER_OZ = MM_PER_IN / 64;
 
-/** Inches to millimetres. */
+/**
+ * Inches to millimetres, rounded to the nanometre so that 1 1/2 in is stored as 38.1 and not
+ * 38.099999999999994: specs and layouts are read by people, and 1e-9 mm is far below any
+ * tolerance of leather or paper.
+ */
 export function inToMm(inches: number): number {
-  return inches * MM_PER_IN;
+  return Math.round(inches * MM_PER_IN * 1e9) / 1e9;
 }
 
 /** Millimetres to inches. */

@@ -1,0 +1,18 @@
+import { describe, expect, it } from 'vitest';
+import { svgNumber } from './svg-style.ts';
+import { inToMm } from '../units/length.ts';
+
+describe('svgNumber', () => {
+  it('when a value and its negative are written, then both round to the same magnitude', () => {
+    // 3/8 in = 9.525 mm exactly (1959 inch); half of it sits on a rounding half at 0.001 mm.
+    const half = inToMm(3 / 8) / 2;
+    expect(svgNumber(half)).toBe('4.763');
+    expect(svgNumber(-half)).toBe('-4.763');
+    expect(svgNumber(-0.0001)).toBe('0.000');
+  });
+
+  it('when inches are converted, then binary noise is gone (1 1/2 in = 38.1 mm exactly, 1959 agreement)', () => {
+    expect(inToMm(1.5)).toBe(38.1);
+    expect(inToMm(0.75)).toBe(19.05);
+  });
+});
