@@ -42,7 +42,7 @@ export function InviteForm() {
         <SelectField label="Role" {...register('role')} error={formState.errors.role?.message}>
           {ROLE_OPTIONS.map((r) => (
             <option key={r.value} value={r.value}>
-              {r.label}: {r.duty}
+              {r.label}
             </option>
           ))}
         </SelectField>
@@ -50,6 +50,7 @@ export function InviteForm() {
           Send invite
         </Button>
       </div>
+      <p className="text-xs text-hide-600">{ROLE_OPTIONS.map((r) => `${r.label}: ${r.duty}.`).join(' ')}</p>
     </form>
   );
 }

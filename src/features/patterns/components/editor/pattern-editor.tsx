@@ -2,7 +2,10 @@ import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { StrapSpecSchema, type StrapSpec, type StrapSpecInput } from '@shared/schemas/strap-spec.ts';
+import { presetSpec } from '@shared/pattern/presets/index.ts';
 import { isApiError } from '@/lib/api-client.ts';
+import { Button } from '@/components/ui/button.tsx';
+import { kindLabel } from '../../kinds.ts';
 import { Panel } from '@/components/ui/panel.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { useFetchLatest, useSaveRevision } from '../../api/mutations.ts';
@@ -67,6 +70,22 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
           <Notice tone="info" role="note">
             Your role can read and print this pattern. A maker or the owner changes it.
           </Notice>
+        )}
+        {canEdit && (
+          <div className="flex items-center justify-between gap-3 rounded-lg border border-dashed border-hide-300 px-4 py-2 text-sm text-hide-700">
+            <span>Start again from the shop&rsquo;s {kindLabel(detail.pattern.kind).toLowerCase()} preset?</span>
+            <Button
+              size="sm"
+              variant="ghost"
+              onClick={() => {
+                const preset = presetSpec(detail.pattern.kind);
+                // Keep the maker's name for the piece; everything else comes from the preset.
+                form.reset({ ...preset, name: form.getValues('name') ?? preset.name }, { keepDefaultValues: true });
+              }}
+            >
+              Load preset values
+            </Button>
+          </div>
         )}
         <form aria-label="Pattern spec" onSubmit={(e) => e.preventDefault()} noValidate>
           <fieldset disabled={!canEdit} className="contents">
