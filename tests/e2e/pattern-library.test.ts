@@ -96,8 +96,20 @@ describe('the pattern library in the browser', () => {
     await snap(page, 'library-05-saved');
   });
 
+  it('when the preset values are loaded and the owner tries to leave, then the form is back at 13 in and leaving asks first', async () => {
+    await page.getByRole('button', { name: 'Load preset values' }).click();
+    await expect.poll(() => page.getByLabel('Girth').inputValue()).toBe('13');
+    await expect.poll(() => blankText(page)).toBe('21 in');
+    await page.getByRole('link', { name: 'Library' }).click();
+    await page.getByRole('alertdialog', { name: 'Leave without saving?' }).waitFor();
+    await snap(page, 'library-05b-leave-guard');
+    await page.getByRole('button', { name: 'Stay and save' }).click();
+    expect(page.url()).toBe(patternUrl);
+  });
+
   it('when the library is searched by name and filtered by kind, then the collar is listed', async () => {
     await page.getByRole('link', { name: 'Library' }).click();
+    await page.getByRole('button', { name: 'Leave' }).click();
     await page.getByTestId('pattern-list').waitFor();
     await page.getByLabel('Search names').fill('Juniper');
     await page.waitForURL(/query=Juniper/);

@@ -15,6 +15,7 @@ import { Downloads } from './downloads.tsx';
 import { LivePreview } from './live-preview.tsx';
 import { SavePanel, type Conflict } from './save-panel.tsx';
 import { SharePanel } from './share-panel.tsx';
+import { LeaveGuard } from './leave-guard.tsx';
 
 export interface PatternEditorProps {
   detail: PatternDetail;
@@ -65,6 +66,7 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
 
   return (
     <div className="grid items-start gap-6 lg:grid-cols-[minmax(320px,420px)_minmax(0,1fr)]">
+      <LeaveGuard dirty={canEdit && form.formState.isDirty} />
       <div className="grid gap-4">
         {!canEdit && (
           <Notice tone="info" role="note">
