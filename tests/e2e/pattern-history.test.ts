@@ -194,4 +194,21 @@ describe('pattern history and sharing in the browser', () => {
     await expect.poll(names, { timeout: 5000 }).toEqual(['Casual belt, Tobias', 'Casual belt, Tobias']);
     await snap(page, 'history-10-archived-shown');
   });
+
+  it('when the library and a pattern are opened on a phone-sized screen, then nothing runs off the side', async () => {
+    const phone = await browser.context.newPage();
+    try {
+      await phone.setViewportSize({ width: 390, height: 844 });
+      for (const [path, name] of [['/', 'history-11-phone-library'], [`/patterns/${id}`, 'history-12-phone-editor']] as const) {
+        await phone.goto(server.url + path);
+        await phone.getByRole('heading', { level: 1 }).first().waitFor();
+        // The page itself must not scroll sideways (wide drawings and tables scroll inside their panels).
+        const overflow = await phone.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+        await snap(phone, name);
+        expect(overflow).toBeLessThanOrEqual(0);
+      }
+    } finally {
+      await phone.close();
+    }
+  });
 });

@@ -47,9 +47,9 @@ export function Component() {
         Skip to content
       </a>
       <header className="border-b border-hide-800 bg-hide-900 text-hide-100">
-        <div className="mx-auto flex h-16 max-w-7xl items-center gap-6 px-4 sm:px-6">
+        <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3 sm:px-6 md:h-16 md:flex-nowrap md:py-0">
           <Wordmark className="text-lg text-paper" />
-          <nav aria-label="Main" className="flex items-center gap-1">
+          <nav aria-label="Main" className="order-last -mx-3 flex w-full items-center gap-1 overflow-x-auto md:order-none md:mx-0 md:w-auto">
             {navItems(me.role).map((item) => (
               <NavLink
                 key={item.to}
@@ -68,12 +68,12 @@ export function Component() {
               </a>
             )}
           </nav>
-          <div className="ml-auto flex items-center gap-4">
-            <div className="text-right leading-tight" data-testid="shell-identity">
-              <p className="text-sm font-semibold text-paper" data-testid="shop-name">
+          <div className="ml-auto flex min-w-0 items-center gap-3 sm:gap-4">
+            <div className="min-w-0 text-right leading-tight" data-testid="shell-identity">
+              <p className="max-w-[12rem] truncate text-sm font-semibold text-paper sm:max-w-none" data-testid="shop-name">
                 {me.shop.name}
               </p>
-              <p className="flex items-center justify-end gap-2 text-xs text-hide-300">
+              <p className="flex items-center justify-end gap-2 whitespace-nowrap text-xs text-hide-300">
                 <span>{me.user.name}</span>
                 <RoleBadge role={me.role} />
               </p>
@@ -81,6 +81,7 @@ export function Component() {
             <Button
               variant="secondary"
               size="sm"
+              className="shrink-0"
               busy={signOut.isPending}
               onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate(paths.auth.signIn.getHref(), { replace: true }) })}
             >

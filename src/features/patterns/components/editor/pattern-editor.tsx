@@ -97,7 +97,7 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
       </div>
       <div className="grid grid-cols-[minmax(0,1fr)] gap-4">
         <LivePreview values={values} revisionLabel={String(base.number)} />
-        <div className="grid gap-4 xl:grid-cols-2">
+        <div className="grid items-start gap-4 xl:grid-cols-2">
           {canEdit && (
             <Panel title="Save">
               <SavePanel
