@@ -15,6 +15,7 @@ import { ruleVsFit } from './rule-vs-fit.ts';
 import { layoutStitchRow } from './stitch.ts';
 import { adjustmentHolesMm, fitReport, strapBlankMm, type LoopParts } from './strap-length.ts';
 import { widthProfile } from './width-profile.ts';
+import { roundLayoutNumbers } from './round-layout.ts';
 
 /** Blank length (mm) of a piece that is not the strap. */
 function otherBlankMm(spec: StrapSpec, piece: PieceSpec, t: number, field: string): number {
@@ -116,7 +117,7 @@ export function computeLayout(spec: StrapSpec): PatternLayout {
     if (p.blankLengthMm > spec.maxStripMm)
       warnings.push({ code: 'blank-longer-than-strip', pieceId: p.id, message: `${p.name}: blank ${formatLength(p.blankLengthMm, spec.units)} is longer than the usual ${formatLength(spec.maxStripMm, spec.units)} strip` });
   const rvf = ruleVsFit(spec, strap, ruleL, fitL, parts);
-  return {
+  return roundLayoutNumbers({
     engineVersion: ENGINE_VERSION,
     kind: spec.kind,
     name: spec.name,
@@ -130,5 +131,5 @@ export function computeLayout(spec: StrapSpec): PatternLayout {
     ruleVsFit: rvf,
     cutList: cutList(spec, pieces, t),
     warnings,
-  };
+  });
 }

@@ -16,3 +16,11 @@ describe('svgNumber', () => {
     expect(inToMm(0.75)).toBe(19.05);
   });
 });
+
+describe('svgNumber near a half', () => {
+  it('when the same half arrives with opposite float noise, then both edges print alike', () => {
+    expect(svgNumber(2.7625 - 1e-12)).toBe('2.763');
+    expect(svgNumber(-(2.7625 + 1e-12))).toBe('-2.763');
+    expect(svgNumber(-(2.7625 - 1e-12))).toBe('-2.763');
+  });
+});

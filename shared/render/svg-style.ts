@@ -5,7 +5,10 @@ import type { LayerName } from './drawing.ts';
  * zero so an outline symmetric about the centreline stays symmetric in the file.
  */
 export function svgNumber(v: number): string {
-  const s = ((Math.sign(v) * Math.round(Math.abs(v) * 1000)) / 1000).toFixed(3);
+  // Round to the micrometre first: 2.7625 may arrive as 2.76249999999 on one edge and
+  // 2.76250000001 on the other, and must print the same on both.
+  const um = Math.round(Math.abs(v) * 1e6);
+  const s = ((Math.sign(v) * Math.round(um / 1000)) / 1000).toFixed(3);
   return s === '-0.000' ? '0.000' : s;
 }
 
