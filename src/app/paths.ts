@@ -15,8 +15,9 @@ export const paths = {
     history: { path: '/patterns/:id/history', getHref: (id: number) => `/patterns/${id}/history` },
     revision: { path: '/patterns/:id/revisions/:n', getHref: (id: number, n: number) => `/patterns/${id}/revisions/${n}` },
     compare: {
-      path: '/patterns/:id/compare',
-      getHref: (id: number, from: number, to: number) => `/patterns/${id}/compare?from=${from}&to=${to}`,
+      // Under history so the History tab stays lit.
+      path: '/patterns/:id/history/compare',
+      getHref: (id: number, from: number, to: number) => `/patterns/${id}/history/compare?from=${from}&to=${to}`,
     },
   },
   shop: {

@@ -50,13 +50,19 @@ export function createAppRouter(queryClient: QueryClient) {
           id: 'app-layout',
           lazy: () => import('./routes/app/layout.tsx').then(load),
           children: [
-            { index: true, lazy: () => import('./routes/app/library.tsx').then(load) },
-            { path: paths.patterns.new.path, lazy: () => import('./routes/app/new-pattern.tsx').then(load) },
-            { path: paths.patterns.detail.path, lazy: () => import('./routes/app/pattern/editor.tsx').then(load) },
-            { path: paths.patterns.history.path, lazy: () => import('./routes/app/pattern/history.tsx').then(load) },
-            { path: paths.patterns.compare.path, lazy: () => import('./routes/app/pattern/compare.tsx').then(load) },
-            { path: paths.shop.members.path, lazy: () => import('./routes/app/members.tsx').then(load) },
-            { path: paths.patterns.revision.path, lazy: () => import('./routes/app/pattern/revision.tsx').then(load) },
+            {
+              // Errors inside a screen render here, inside the shell, so the way back stays in view.
+              ErrorBoundary: RouteErrorBoundary,
+              children: [
+                { index: true, lazy: () => import('./routes/app/library.tsx').then(load) },
+                { path: paths.patterns.new.path, lazy: () => import('./routes/app/new-pattern.tsx').then(load) },
+                { path: paths.patterns.detail.path, lazy: () => import('./routes/app/pattern/editor.tsx').then(load) },
+                { path: paths.patterns.history.path, lazy: () => import('./routes/app/pattern/history.tsx').then(load) },
+                { path: paths.patterns.compare.path, lazy: () => import('./routes/app/pattern/compare.tsx').then(load) },
+                { path: paths.patterns.revision.path, lazy: () => import('./routes/app/pattern/revision.tsx').then(load) },
+                { path: paths.shop.members.path, lazy: () => import('./routes/app/members.tsx').then(load) },
+              ],
+            },
           ],
         },
         { path: paths.share.path, lazy: () => import('./routes/share.tsx').then(load) },

@@ -211,4 +211,25 @@ describe('pattern history and sharing in the browser', () => {
       await phone.close();
     }
   });
+
+  it('when a member of another shop opens this pattern, then it answers not found inside their own shell', async () => {
+    const outsider = await launchBrowser();
+    try {
+      const p = await outsider.context.newPage();
+      await p.goto(server.url + '/sign-up');
+      await p.getByLabel('Your name').fill('Ada Quill');
+      await p.getByLabel('Shop name').fill('Quill Saddlery');
+      await p.getByLabel('E-mail').fill('ada@quill.example');
+      await p.getByLabel('Password').fill('another shop entirely');
+      await p.getByRole('button', { name: 'Create shop and sign in' }).click();
+      await p.getByTestId('shop-name').waitFor();
+      await p.goto(`${server.url}/patterns/${id}`);
+      // 404, never 403, for another shop's pattern (issue 4); the shell and its way back stay.
+      await p.getByRole('heading', { name: 'Not in your shop' }).waitFor();
+      await expect(p.getByTestId('shop-name').textContent()).resolves.toBe('Quill Saddlery');
+      await snap(p, 'history-13-other-shop-404');
+    } finally {
+      await outsider.close();
+    }
+  });
 });

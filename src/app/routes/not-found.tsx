@@ -11,7 +11,7 @@ export function Component() {
         <h1 className="mt-6 text-2xl font-semibold text-hide-900">Nothing cut to this shape</h1>
         <p className="mt-2 text-hide-700">There is no page at this address.</p>
         <Link to={paths.home.getHref()} className={buttonClass('primary', 'md', 'mt-6')}>
-          Back to the workbench
+          Back to the library
         </Link>
       </div>
     </main>

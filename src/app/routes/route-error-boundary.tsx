@@ -24,17 +24,21 @@ function describe(error: unknown): { title: string; detail: string } {
 export function RouteErrorBoundary() {
   const error = useRouteError();
   const { title, detail } = describe(error);
+  // Reloading cannot bring back what is not there.
+  const missing = (isRouteErrorResponse(error) || error instanceof ApiError) && error.status === 404;
   return (
     <div role="alert" className="mx-auto my-16 max-w-lg rounded-lg border border-thread-500/40 bg-white/80 p-8 shadow-sm">
       <p className="text-xs font-semibold uppercase tracking-widest text-thread-500">Stopped</p>
       <h1 className="mt-2 text-xl font-semibold text-hide-900">{title}</h1>
       <p className="mt-2 text-hide-700">{detail}</p>
       <div className="mt-6 flex gap-3">
-        <button type="button" className={buttonClass('primary')} onClick={() => window.location.reload()}>
-          Reload
-        </button>
-        <Link to={paths.home.getHref()} className={buttonClass('secondary')}>
-          Back to the workbench
+        {!missing && (
+          <button type="button" className={buttonClass('primary')} onClick={() => window.location.reload()}>
+            Reload
+          </button>
+        )}
+        <Link to={paths.home.getHref()} className={buttonClass(missing ? 'primary' : 'secondary')}>
+          Back to the library
         </Link>
       </div>
     </div>
