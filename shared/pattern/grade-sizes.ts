@@ -2,6 +2,7 @@ import type { StrapSpec } from '../schemas/strap-spec.ts';
 import { EngineError } from './engine-error.ts';
 import { computeLayout } from './compute-layout.ts';
 import type { Warning } from './layout-types.ts';
+import { roundLayoutNumbers } from './round-layout.ts';
 
 /** One graded size. */
 export interface SizeRow {
@@ -54,5 +55,5 @@ export function gradeSizes(spec: StrapSpec, sizes: readonly { name: string; girt
     const d = b.rangeMm[0] - a.rangeMm[1];
     joins.push({ between: [a.name, b.name], kind: Math.abs(d) < 0.05 ? 'touch' : d > 0 ? 'gap' : 'overlap', mm: Math.abs(d) });
   }
-  return { sizes: rows, joins };
+  return roundLayoutNumbers({ sizes: rows, joins });
 }

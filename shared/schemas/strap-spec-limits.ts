@@ -26,3 +26,8 @@ export const FEATURES_MAX = 24;
 export const TAPER_STATIONS_MAX = 8;
 export const STITCH_ROWS_MAX = 8;
 export const NAME_MAX_CHARS = 120;
+
+/** Named sizes a pattern may be graded into (a size run). */
+export const SIZES_MAX = 12;
+/** Longest size name ("XL", "Juniper", "38"). */
+export const SIZE_NAME_MAX_CHARS = 24;

@@ -182,6 +182,18 @@ export const LengthRuleSchema = z.discriminatedUnion('measure', [
   z.object({ measure: z.literal('fixed'), blankMm: mm('rule blank length', 10, L.BLANK_MAX_MM) }),
 ]);
 
+/** One named size of a run: the same pattern at another girth. */
+export const SizeSchema = z.object({
+  name: z
+    .string()
+    .trim()
+    .min(1, { error: 'size name must not be empty' })
+    .max(L.SIZE_NAME_MAX_CHARS, { error: `size name must be at most ${L.SIZE_NAME_MAX_CHARS} characters` }),
+  girthMm: mm('size girth', L.GIRTH_MIN_MM, L.GIRTH_MAX_MM),
+});
+/** One named size. */
+export type SizeSpec = z.infer<typeof SizeSchema>;
+
 /** The whole pattern as a maker specifies it. Stored as JSON, validated by forms, routes and the CLI. */
 export const StrapSpecSchema = z.object({
   specVersion: z.literal(1),
@@ -208,6 +220,12 @@ export const StrapSpecSchema = z.object({
   /** Longest strip the shop usually cuts from; longer blanks get a warning. */
   maxStripMm: mm('usual strip length', 100, L.BLANK_MAX_MM).default(1524),
   pieces: z.array(PieceSpecSchema).min(1, { error: 'a pattern needs at least 1 piece' }).max(L.PIECES_MAX, { error: `a pattern has at most ${L.PIECES_MAX} pieces` }),
+  /** Optional size run graded from this pattern (printed with `size=NAME` or `size=all`). */
+  sizes: z
+    .array(SizeSchema)
+    .max(L.SIZES_MAX, { error: `a size run has at most ${L.SIZES_MAX} sizes` })
+    .refine((a) => new Set(a.map((x) => x.name.toLowerCase())).size === a.length, { error: 'size names must be unique' })
+    .default([]),
 });
 
 /** A validated strap spec (all lengths in mm; `units` is only the display unit). */

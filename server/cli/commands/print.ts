@@ -72,7 +72,7 @@ export async function run(argv: string[]): Promise<number> {
       patternName: str('name') ?? (spec.name || spec.kind),
       revision: str('revision') ?? '',
       date,
-      ...(sizesText !== undefined ? { sizes: parseSizes(sizesText) } : {}),
+      sizes: sizesText !== undefined ? parseSizes(sizesText) : (spec.sizes ?? []),
     };
     try {
       const options = parsePrintOptions(raw);

@@ -9,7 +9,7 @@ import type { RevisionRow } from '../revisions/revisions.repository.ts';
 export async function printSaved(patternName: string, revision: RevisionRow, format: ExportFormat, query: Request['query']): Promise<PrintedFile> {
   const spec = JSON.parse(revision.spec) as StrapSpec;
   try {
-    return await printRevision(spec, query as Record<string, string>, { patternName, revision: revision.number, date: new Date(Number(revision.created_at)) }, format);
+    return await printRevision(spec, query as Record<string, string>, { patternName, revision: revision.number, date: new Date(Number(revision.created_at)), sizes: spec.sizes ?? [] }, format);
   } catch (err) {
     throw printErrorToHttp(err);
   }

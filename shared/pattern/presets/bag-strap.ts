@@ -11,6 +11,7 @@ export function bagStrapPreset(): StrapSpec {
   const end = { kind: 'plain' as const, holes: [screw(0.5), screw(1.25)], shape: { kind: 'round' as const } };
   return {
     specVersion: 1,
+    sizes: [],
     kind: 'bag-strap',
     name: 'Satchel strap, Harrow & Finch',
     units: 'in',

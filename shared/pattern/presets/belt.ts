@@ -14,6 +14,7 @@ export function beltPreset(): StrapSpec {
   const screw = (at: number) => ({ fromEndMm: inch(at), yMm: 0, diameterMm: inch(5 / 32), fastener: 'screw' as const });
   return {
     specVersion: 1,
+    sizes: [],
     kind: 'belt',
     name: 'Belt for Tobias Harrow',
     units: 'in',

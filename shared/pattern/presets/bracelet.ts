@@ -10,6 +10,7 @@ export function braceletPreset(): StrapSpec {
   const end = { kind: 'plain' as const, holes: [snap], shape: { kind: 'round' as const } };
   return {
     specVersion: 1,
+    sizes: [],
     kind: 'bracelet',
     name: 'Bracelet for Maren Finch',
     units: 'in',

@@ -12,6 +12,7 @@ export function collarPreset(): StrapSpec {
   const rivet = (at: number) => ({ fromEndMm: inch(at), yMm: 0, diameterMm: inch(1 / 8), fastener: 'rivet' as const });
   return {
     specVersion: 1,
+    sizes: [],
     kind: 'collar',
     name: 'Collar for Juniper',
     units: 'in',

@@ -12,6 +12,7 @@ export function keeperPreset(): StrapSpec {
   const plain = { kind: 'plain' as const, holes: [], shape: { kind: 'square' as const } };
   return {
     specVersion: 1,
+    sizes: [],
     kind: 'keeper',
     name: 'Keeper for a 1 1/2 in belt',
     units: 'in',

@@ -11,6 +11,7 @@ export function leashPreset(): StrapSpec {
   const rivet = (at: number) => ({ fromEndMm: inch(at), yMm: 0, diameterMm: inch(1 / 8), fastener: 'rivet' as const });
   return {
     specVersion: 1,
+    sizes: [],
     kind: 'leash',
     name: 'Leash for Bosun',
     units: 'in',

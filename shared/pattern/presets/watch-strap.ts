@@ -11,6 +11,7 @@ export function watchStrapPreset(): StrapSpec {
   const stitch = { path: 'both-edges' as const, offsetMm: 2.5, pitchMm: 3.85, tolerancePct: 6 };
   return {
     specVersion: 1,
+    sizes: [],
     kind: 'watch-strap',
     name: 'Watch strap for Ilse Park',
     units: 'mm',
