@@ -1,4 +1,4 @@
-/** The public engine: spec in, Layout and Drawing out. See SPEC-FORMAT.md for the spec file. */
+/** The public engine: spec in, Layout and Drawing out. The spec file format is documented in README.md. */
 export { PRESET_NAMES, type PresetName, type StrapSpec } from '../schemas/strap-spec.ts';
 export { presetSpec } from './presets/index.ts';
 export { parseSpec } from './parse-spec.ts';
