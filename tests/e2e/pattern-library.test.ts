@@ -96,6 +96,28 @@ describe('the pattern library in the browser', () => {
     await snap(page, 'library-05-saved');
   });
 
+  it('when lengths are shown in millimetres, then the 15 in girth reads 381 (1 in = 25.4 mm, 1959 agreement) and the labels say mm', async () => {
+    await page.getByLabel('Show lengths in').selectOption('mm');
+    await expect.poll(() => page.getByLabel('Girth').inputValue()).toBe('381');
+    // Every length field names its unit in its label (and so in its accessible name).
+    await page.getByLabel('Girth (mm)', { exact: true }).waitFor();
+    await expect.poll(() => blankText(page)).toBe('584.2 mm');
+    await snap(page, 'library-05c-millimetres');
+    await page.getByLabel('Show lengths in').selectOption('in');
+    await expect.poll(() => page.getByLabel('Girth').inputValue()).toBe('15');
+  });
+
+  it('when the length comes from fit instead of the rule, then the nominal hole closes on girth + ease within 1/32 in', async () => {
+    await page.getByLabel('Length from').selectOption('fit');
+    const nominal = page.getByTestId('fit-table').locator('tr[aria-current="true"]');
+    // Fit mode puts the nominal hole at the target inside length (TRADE.md: the buckle lands on the middle hole).
+    await expect.poll(async () => (await nominal.locator('td').nth(3).textContent())?.trim()).toBe('±0');
+    await page.getByTestId('rule-vs-fit').getByText('Fit (in use)').waitFor();
+    await snap(page, 'library-05d-fit-mode');
+    await page.getByLabel('Length from').selectOption('rule');
+    await expect.poll(() => blankText(page)).toBe('23 in');
+  });
+
   it('when the preset values are loaded and the owner tries to leave, then the form is back at 13 in and leaving asks first', async () => {
     await page.getByRole('button', { name: 'Load preset values' }).click();
     await expect.poll(() => page.getByLabel('Girth').inputValue()).toBe('13');

@@ -27,7 +27,7 @@ function FieldFrame({ id, label, unit, hint, error, children, className }: Field
     <div className={cx('flex flex-col gap-1', className)}>
       <label htmlFor={id} className="text-sm font-medium text-hide-900">
         {label}
-        {unit && <span className="ml-1 font-normal text-hide-600">({unit})</span>}
+        {unit && <> <span className="font-normal text-hide-600">({unit})</span></>}
       </label>
       {children}
       {hint && !error && (
