@@ -98,31 +98,38 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
       <div className="grid grid-cols-[minmax(0,1fr)] gap-4">
         <LivePreview values={values} revisionLabel={String(base.number)} />
         <div className="grid items-start gap-4 xl:grid-cols-2">
-          {canEdit && (
-            <Panel title="Save">
-              <SavePanel
-                dirty={form.formState.isDirty}
-                blocked={blocked}
-                saving={save.isPending}
-                baseNumber={base.number}
-                savedNumber={savedNumber}
-                error={error}
-                conflict={conflict}
-                onSave={onSave}
-                onKeepMine={() => {
-                  if (!conflict) return;
-                  setBase({ etag: conflict.detail.etag, number: conflict.number });
-                  setConflict(null);
-                }}
-                onTakeTheirs={() => {
-                  if (!conflict) return;
-                  setBase({ etag: conflict.detail.etag, number: conflict.number });
-                  form.reset(conflict.detail.head.spec as StrapSpecInput);
-                  setConflict(null);
-                }}
-              />
-            </Panel>
-          )}
+          <div className="grid gap-4">
+            {canEdit && (
+              <Panel title="Save">
+                <SavePanel
+                  dirty={form.formState.isDirty}
+                  blocked={blocked}
+                  saving={save.isPending}
+                  baseNumber={base.number}
+                  savedNumber={savedNumber}
+                  error={error}
+                  conflict={conflict}
+                  onSave={onSave}
+                  onKeepMine={() => {
+                    if (!conflict) return;
+                    setBase({ etag: conflict.detail.etag, number: conflict.number });
+                    setConflict(null);
+                  }}
+                  onTakeTheirs={() => {
+                    if (!conflict) return;
+                    setBase({ etag: conflict.detail.etag, number: conflict.number });
+                    form.reset(conflict.detail.head.spec as StrapSpecInput);
+                    setConflict(null);
+                  }}
+                />
+              </Panel>
+            )}
+            {canShare && (
+              <Panel title="Share read-only">
+                <SharePanel patternId={id} headNumber={base.number} />
+              </Panel>
+            )}
+          </div>
           <Panel title="Print and download">
             <Downloads
               base={`/api/patterns/${id}/revisions/${base.number}`}
@@ -131,11 +138,6 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
               dirty={form.formState.isDirty}
             />
           </Panel>
-          {canShare && (
-            <Panel title="Share read-only">
-              <SharePanel patternId={id} headNumber={base.number} />
-            </Panel>
-          )}
         </div>
       </div>
     </div>
