@@ -79,6 +79,7 @@ describe('pattern history and sharing in the browser', () => {
     const items = page.getByTestId('revision-list').locator('li');
     await expect(items.getByTestId('revision-link').allTextContents()).resolves.toEqual(['Revision 3', 'Revision 2', 'Revision 1']);
     await page.getByText('restored from 1').waitFor();
+    await page.getByTestId('activity').getByText('restored revision 1 as revision 3').waitFor();
     await snap(page, 'history-03-restored');
   });
 

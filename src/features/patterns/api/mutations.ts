@@ -40,6 +40,7 @@ export function useSaveRevision(id: number) {
     onSuccess: async (saved) => {
       queryClient.setQueryData(patternKeys.detail(id), saved);
       await queryClient.invalidateQueries({ queryKey: patternKeys.revisions(id) });
+      await queryClient.invalidateQueries({ queryKey: patternKeys.activity(id) });
       await queryClient.invalidateQueries({ queryKey: patternKeys.lists() });
     },
   });
@@ -57,6 +58,7 @@ export function useRestoreRevision(id: number) {
     onSuccess: async (restored) => {
       queryClient.setQueryData(patternKeys.detail(id), restored);
       await queryClient.invalidateQueries({ queryKey: patternKeys.revisions(id) });
+      await queryClient.invalidateQueries({ queryKey: patternKeys.activity(id) });
       await queryClient.invalidateQueries({ queryKey: patternKeys.lists() });
     },
   });
@@ -80,6 +82,7 @@ export function useUpdatePattern(id: number) {
     mutationFn: (body: UpdatePatternInput) => api.patch<unknown>(`/api/patterns/${id}`, body),
     onSuccess: async () => {
       await queryClient.invalidateQueries({ queryKey: patternKeys.detail(id), exact: true });
+      await queryClient.invalidateQueries({ queryKey: patternKeys.activity(id) });
       await queryClient.invalidateQueries({ queryKey: patternKeys.lists() });
     },
   });

@@ -29,6 +29,7 @@ export const patternKeys = {
   revision: (id: number, n: number) => [...patternKeys.revisions(id), n] as const,
   compare: (id: number, from: number, to: number) => [...patternKeys.detail(id), 'compare', { from, to }] as const,
   shares: (id: number) => [...patternKeys.detail(id), 'shares'] as const,
+  activity: (id: number) => [...patternKeys.detail(id), 'activity'] as const,
 };
 
 const PAGE_SIZE = 24;

@@ -1,6 +1,8 @@
 import { useState } from 'react';
 import { useNavigate, useParams, type LoaderFunction } from 'react-router-dom';
-import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
+import { useQuery, useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
+import { activityQueryOptions } from '@/features/patterns/api/activity.ts';
+import { ActivityList } from '@/features/patterns/components/history/activity-list.tsx';
 import { can } from '@shared/schemas/permissions.ts';
 import { meQueryOptions } from '@/features/auth/api/queries.ts';
 import { isSignedIn } from '@/features/auth/api/signed-in.ts';
@@ -30,6 +32,7 @@ export function Component() {
   const { data: detail } = useSuspenseQuery(patternQueryOptions(id));
   const { data: history } = useSuspenseQuery(revisionsQueryOptions(id));
   const restore = useRestoreRevision(id);
+  const activity = useQuery(activityQueryOptions(id));
   const [restoring, setRestoring] = useState<number | null>(null);
   const [message, setMessage] = useState<{ tone: 'success' | 'danger'; text: string }>();
   const numbers = history.items.map((r) => r.number);
@@ -65,15 +68,18 @@ export function Component() {
           />
         </Panel>
       )}
-      <RevisionList
-        revisions={history.items}
-        headNumber={head}
-        canRestore={me ? can(me.role, 'revisions.restore') : false}
-        restoring={restoring}
-        hrefOf={(n) => paths.patterns.revision.getHref(id, n)}
-        compareHref={(from, to) => paths.patterns.compare.getHref(id, from, to)}
-        onRestore={(n) => void onRestore(n)}
-      />
+      <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_320px]">
+        <RevisionList
+          revisions={history.items}
+          headNumber={head}
+          canRestore={me ? can(me.role, 'revisions.restore') : false}
+          restoring={restoring}
+          hrefOf={(n) => paths.patterns.revision.getHref(id, n)}
+          compareHref={(from, to) => paths.patterns.compare.getHref(id, from, to)}
+          onRestore={(n) => void onRestore(n)}
+        />
+        <Panel title="Activity">{activity.data ? <ActivityList items={activity.data.items} /> : <p className="text-sm text-hide-600">Loading…</p>}</Panel>
+      </div>
     </div>
   );
 }

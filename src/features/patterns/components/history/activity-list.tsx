@@ -1,0 +1,46 @@
+import { formatWhen } from '@/lib/format-when.ts';
+import type { ActivityItem } from '../../api/activity.ts';
+
+const num = (v: unknown) => (typeof v === 'number' ? v : undefined);
+
+/** The audit trail in sentences; unknown actions still show, by their code. */
+function sentence(item: ActivityItem): string {
+  const d = item.detail;
+  switch (item.action) {
+    case 'pattern.created':
+      return 'started the pattern';
+    case 'pattern.imported':
+      return 'imported it from a file';
+    case 'pattern.duplicated':
+      return 'duplicated it';
+    case 'pattern.exported':
+      return 'exported it to a file';
+    case 'pattern.updated':
+      return 'changed its name, tags or archive state';
+    case 'revision.saved':
+      return `saved revision ${num(d.number) ?? ''}`.trim();
+    case 'revision.restored':
+      return `restored revision ${num(d.restoredFrom) ?? '?'} as revision ${num(d.number) ?? '?'}`;
+    case 'share.created':
+      return num(d.revision) ? `made a share link to revision ${num(d.revision)}` : 'made a share link to the latest revision';
+    case 'share.revoked':
+      return 'revoked a share link';
+    default:
+      return item.action;
+  }
+}
+
+export function ActivityList({ items }: { items: readonly ActivityItem[] }) {
+  if (items.length === 0) return <p className="text-sm text-hide-600">Nothing recorded yet.</p>;
+  return (
+    <ol className="space-y-1.5 text-sm" aria-label="Activity" data-testid="activity">
+      {items.map((i) => (
+        <li key={i.id} className="flex flex-wrap gap-x-2">
+          <span className="font-medium text-hide-900">{i.by?.name ?? 'Someone'}</span>
+          <span className="text-hide-800">{sentence(i)}</span>
+          <span className="text-hide-500">· {formatWhen(i.at)}</span>
+        </li>
+      ))}
+    </ol>
+  );
+}
