@@ -32,6 +32,9 @@ import { transferRoutes } from './modules/transfer/transfer.routes.ts';
 import { createTransferService } from './modules/transfer/transfer.service.ts';
 import { shareRoutes } from './modules/share/share.routes.ts';
 import { createShareService } from './modules/share/share.service.ts';
+import { printJobsRoutes } from './modules/downloads/print-jobs.routes.ts';
+import { createPrintJobsService } from './modules/downloads/print-jobs.service.ts';
+import type { PrintJobLimits } from './modules/downloads/print-job-table.ts';
 
 export interface AppDeps {
   db: Knex;
@@ -43,6 +46,8 @@ export interface AppDeps {
   /** Outgoing mail: a nodemailer transport (default from config.smtp) and, in development
    * and tests, the fake SMTP server's mailbox shown at /dev/mail. */
   mail?: { transport?: Transporter; mailbox?: Mailbox };
+  /** Bounds of the in-memory print-job table (queue size, lifetimes); defaults suit a shop. */
+  printJobs?: Partial<PrintJobLimits>;
 }
 
 /** What createApp exposes beside the app (tests flush mail through it). */
@@ -57,7 +62,7 @@ export const internalsOf = (app: Express) => app.locals.latchet as AppInternals;
 /** Default location of the client build. */
 export const CLIENT_DIR = fileURLToPath(new URL('../dist/client', import.meta.url));
 
-export function createApp({ db, config, clientDir = CLIENT_DIR, log, mail }: AppDeps): Express {
+export function createApp({ db, config, clientDir = CLIENT_DIR, log, mail, printJobs }: AppDeps): Express {
   const app = express();
   app.set('trust proxy', config.trustProxy);
   app.disable('x-powered-by');
@@ -114,7 +119,9 @@ export function createApp({ db, config, clientDir = CLIENT_DIR, log, mail }: App
   api.use(patternsRoutes(patterns, revisions));
   api.use(downloadsRoutes(deps, revisions));
   api.use(compareRoutes(deps));
-  api.use(shareRoutes(createShareService(deps, repos.shares)));
+  const shares = createShareService(deps, repos.shares);
+  api.use(shareRoutes(shares));
+  api.use(printJobsRoutes(deps, revisions, shares, createPrintJobsService(printJobs, log ?? ((e) => console.error(e)))));
   api.use(membersRoutes(createMembersService(db, repos.members, repos.audit)));
   api.use(invitesRoutes(createInvitesService(deps, repos.invites, repos.members), { service: authService, repo: authRepo, lucia }, config));
   api.use(settingsRoutes(repos.follows));

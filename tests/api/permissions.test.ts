@@ -9,6 +9,7 @@ import { PERMISSIONS, can, type Action, type Actor } from '@shared/schemas/permi
 import { newToken, tokenHash } from '../../server/modules/invites/tokens.ts';
 import { revisionEtag } from '../../server/modules/revisions/etag.ts';
 import { createTestApp, type TestApp } from '../helpers/test-app.ts';
+import { pollJob, postJob } from '../helpers/print-jobs.ts';
 import { buildWorld, collarWithGirth, type Member, type ShopWorld } from '../helpers/shop-world.ts';
 
 type Who = Exclude<Actor, 'anonymous'> | 'outsider' | 'anonymous';
@@ -53,6 +54,18 @@ const headEtag = async ({ t, w }: Ctx) => {
   return revisionEtag(p.id, p.head_number);
 };
 const pid = (c: Ctx) => c.w.collar.pattern.id;
+/** A print job of the main shop's collar, started by its maker (settled when `settled`). */
+async function memberJob({ t, w }: Ctx, settled = false): Promise<string> {
+  const job = await postJob(t.app, `/api/patterns/${w.collar.pattern.id}/revisions/1/print-jobs`, {}, w.maker.cookie);
+  if (settled) await pollJob(t.app, job.url, w.maker.cookie, 20);
+  return job.url;
+}
+/** A print job started through a share link (settled when `settled`). */
+async function shareJob(c: Ctx, settled = false): Promise<string> {
+  const job = await postJob(c.t.app, `/api/s/${(await shareToken(c)).token}/print-jobs`);
+  if (settled) await pollJob(c.t.app, job.url, undefined, 20);
+  return job.url;
+}
 
 /** One request per action that succeeds for an allowed actor. */
 const SAMPLES: Record<Action, { scope: Scope; make: (c: Ctx) => Promise<Sample> }> = {
@@ -84,6 +97,9 @@ const SAMPLES: Record<Action, { scope: Scope; make: (c: Ctx) => Promise<Sample> 
   'print.pdf': { scope: 'pattern', make: async (c) => ({ path: `/api/patterns/${pid(c)}/revisions/1/pdf` }) },
   'print.svg': { scope: 'pattern', make: async (c) => ({ path: `/api/patterns/${pid(c)}/revisions/1/svg` }) },
   'print.cutter': { scope: 'pattern', make: async (c) => ({ path: `/api/patterns/${pid(c)}/revisions/1/cutter.svg` }) },
+  'print.jobs.create': { scope: 'pattern', make: async (c) => ({ path: `/api/patterns/${pid(c)}/revisions/1/print-jobs`, body: { paper: 'a4' } }) },
+  'print.jobs.read': { scope: 'pattern', make: async (c) => ({ path: await memberJob(c) }) },
+  'print.jobs.file': { scope: 'pattern', make: async (c) => ({ path: `${await memberJob(c, true)}/file` }) },
   'share.list': { scope: 'pattern', make: async (c) => ({ path: `/api/patterns/${pid(c)}/shares` }) },
   'share.create': { scope: 'pattern', make: async (c) => ({ path: `/api/patterns/${pid(c)}/share`, body: { revision: 1 } }) },
   'share.revoke': { scope: 'pattern', make: async (c) => ({ path: `/api/share/${(await shareToken(c)).id}` }) },
@@ -91,6 +107,9 @@ const SAMPLES: Record<Action, { scope: Scope; make: (c: Ctx) => Promise<Sample> 
   'share.pdf': { scope: 'public', make: async (c) => ({ path: `/api/s/${(await shareToken(c)).token}/pdf` }) },
   'share.svg': { scope: 'public', make: async (c) => ({ path: `/api/s/${(await shareToken(c)).token}/svg` }) },
   'share.cutter': { scope: 'public', make: async (c) => ({ path: `/api/s/${(await shareToken(c)).token}/cutter.svg` }) },
+  'share.jobs.create': { scope: 'public', make: async (c) => ({ path: `/api/s/${(await shareToken(c)).token}/print-jobs`, body: {} }) },
+  'share.jobs.read': { scope: 'public', make: async (c) => ({ path: await shareJob(c) }) },
+  'share.jobs.file': { scope: 'public', make: async (c) => ({ path: `${await shareJob(c, true)}/file` }) },
   'members.list': { scope: 'shop', make: async () => ({ path: '/api/shop/members' }) },
   'members.update': { scope: 'pattern', make: async ({ t, w }) => ({ path: `/api/shop/members/${await extraMember(t, w)}`, body: { role: 'maker' } }) },
   'members.remove': { scope: 'pattern', make: async ({ t, w }) => ({ path: `/api/shop/members/${await extraMember(t, w)}` }) },
@@ -137,7 +156,8 @@ for (const action of Object.keys(PERMISSIONS) as Action[]) {
     let w: ShopWorld;
     let revisionsBefore: unknown[];
     beforeAll(async () => {
-      t = await createTestApp({ env: { AUTH_RATE_LIMIT: '1000' } });
+      // Every actor's sample may start a print job; the queue bound is not what this tests.
+      t = await createTestApp({ env: { AUTH_RATE_LIMIT: '1000' }, deps: { printJobs: { maxPending: 50, maxPendingPerOwner: 50 } } });
       w = await buildWorld(t);
       revisionsBefore = await t.db('revisions').orderBy('id');
     });

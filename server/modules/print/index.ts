@@ -17,7 +17,7 @@ export { PagePlanError, type PagePlan } from './page-plan.ts';
 export { jobSheetFromLayout } from './job-sheet-from-layout.ts';
 export { printRevisionInline, type PrintedFile, type PrintProgress } from './print-revision.ts';
 export { runPrintJob, printQueueDepth, stopPrintWorker } from './print-job.ts';
-export { ALL_SIZES, type SizeDef } from './size-run.ts';
+export { ALL_SIZES, specsForSize, type SizeDef } from './size-run.ts';
 export type { RevisionMeta } from './revision-drawing.ts';
 export { printErrorToHttp } from './print-http-error.ts';
 

@@ -1,0 +1,54 @@
+// Print-job helpers for API tests: post a job, poll it until it settles, read a binary body.
+import request from 'supertest';
+import type { Express } from 'express';
+
+/** The job shape the API answers (server/modules/downloads/print-jobs.service.ts). */
+export interface JobBody {
+  id: string;
+  state: 'queued' | 'running' | 'done' | 'failed';
+  stage: 'layout' | 'pages' | null;
+  done: number;
+  total: number;
+  progress: number;
+  fileName: string;
+  url: string;
+  fileUrl: string;
+  error?: { code: string; message: string; fields?: Record<string, string> };
+}
+
+/** A supertest request whose body is collected as a Buffer (PDFs, SVGs). */
+export const binary = (req: request.Test) =>
+  req.buffer(true).parse((res, cb) => {
+    const chunks: Buffer[] = [];
+    res.on('data', (c: Buffer) => chunks.push(c));
+    res.on('end', () => cb(null, Buffer.concat(chunks)));
+  });
+
+/** Posts a job to `path` (a .../print-jobs URL) and returns the 202's job. */
+export async function postJob(app: Express, path: string, body: object = {}, cookie?: string): Promise<JobBody> {
+  let req = request(app).post(path);
+  if (cookie) req = req.set('Cookie', cookie);
+  const res = await req.send(body);
+  if (res.status !== 202) throw new Error(`POST ${path}: ${res.status} ${JSON.stringify(res.body)}`);
+  return res.body.job as JobBody;
+}
+
+/**
+ * Polls the job at `url` every `everyMs` until it is done or failed (at most `timeoutMs`);
+ * returns every answer seen, the last one settled.
+ */
+export async function pollJob(app: Express, url: string, cookie?: string, everyMs = 5, timeoutMs = 60_000): Promise<JobBody[]> {
+  const seen: JobBody[] = [];
+  const until = Date.now() + timeoutMs;
+  for (;;) {
+    let req = request(app).get(url);
+    if (cookie) req = req.set('Cookie', cookie);
+    const res = await req;
+    if (res.status !== 200) throw new Error(`GET ${url}: ${res.status} ${JSON.stringify(res.body)}`);
+    const job = res.body.job as JobBody;
+    seen.push(job);
+    if (job.state === 'done' || job.state === 'failed') return seen;
+    if (Date.now() > until) throw new Error(`job ${url} still ${job.state} after ${timeoutMs} ms`);
+    await new Promise((r) => setTimeout(r, everyMs));
+  }
+}
