@@ -62,6 +62,7 @@ export function Component() {
       {numbers.length > 1 && (
         <Panel title="Compare">
           <ComparePicker
+            key={head}
             numbers={[...numbers].reverse()}
             initial={{ from: numbers[1] ?? 1, to: head }}
             onCompare={(from, to) => navigate(paths.patterns.compare.getHref(id, from, to))}
