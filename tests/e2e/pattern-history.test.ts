@@ -233,4 +233,26 @@ describe('pattern history and sharing in the browser', () => {
       await outsider.close();
     }
   });
+
+  it('when the library holds more patterns than a page, then "Show more" fetches the next cursor page and nothing repeats', async () => {
+    for (let i = 1; i <= 25; i++) {
+      const res = await page.request.post(server.url + '/api/patterns', {
+        headers: { Origin: server.url },
+        data: { name: `Keeper ${String(i).padStart(2, '0')}`, kind: 'keeper', spec: presetSpec('keeper') },
+      });
+      expect(res.status()).toBe(201);
+    }
+    await page.goto(server.url + '/?sort=name');
+    const cards = page.getByTestId('pattern-list').getByRole('link');
+    await cards.first().waitFor();
+    // 24 a page (the client's page size), 26 visible in all: the imported belt and 25 keepers.
+    expect(await cards.count()).toBe(24);
+    await page.getByRole('button', { name: 'Show more patterns' }).click();
+    await expect.poll(() => cards.count()).toBe(26);
+    const names = await cards.allTextContents();
+    expect(new Set(names).size).toBe(26);
+    expect(names.slice(0, 2)).toEqual(['Casual belt, Tobias', 'Keeper 01']);
+    expect(await page.getByRole('button', { name: 'Show more patterns' }).count()).toBe(0);
+    await snap(page, 'history-14-library-pages');
+  });
 });
