@@ -20,12 +20,19 @@ describe('accounts in the browser', () => {
   let server: Server;
   let browser: TestBrowser;
   let page: Page;
+  const problems: string[] = [];
 
   beforeAll(async () => {
     await ensureClientBuilt();
     server = await startTestServer();
     browser = await launchBrowser();
     page = await browser.context.newPage();
+    // Script errors and Content-Security-Policy refusals (fonts, styles, the inline icon) are bugs.
+    page.on('pageerror', (e) => problems.push(`pageerror: ${e.message}`));
+    page.on('console', (m) => {
+      // Answers such as 401 on /api/me while signed out are expected; the browser logs them as resource errors.
+      if (m.type() === 'error' && !m.text().startsWith('Failed to load resource')) problems.push(`console: ${m.text()}`);
+    });
   }, 180_000);
 
   afterAll(async () => {
@@ -119,5 +126,9 @@ describe('accounts in the browser', () => {
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.getByRole('heading', { name: 'People in the shop' }).waitFor();
     expect(new URL(page.url()).pathname).toBe('/shop/members');
+  });
+
+  it('when the whole flow has run, then the page logged no script error and no Content-Security-Policy refusal', () => {
+    expect(problems).toEqual([]);
   });
 });
