@@ -3,33 +3,49 @@ import { LengthField } from '@/components/form/length-field.tsx';
 import { SelectInput } from '@/components/form/select-input.tsx';
 import { CheckboxInput } from '@/components/form/checkbox-input.tsx';
 import { FormSection } from './form-section.tsx';
-import type { SectionProps } from './types.ts';
+import type { SectionProps, SpecSetValue } from './types.ts';
 
 const UNIT_OPTIONS = [
   { value: 'in', label: 'Inches' },
   { value: 'mm', label: 'Millimetres' },
 ];
 const MODE_OPTIONS = [
-  { value: 'rule', label: 'Shop rule: girth + allowance' },
+  { value: 'rule', label: 'Shop rule' },
   { value: 'fit', label: 'Fit: girth + ease, thickness counted' },
 ];
 const MEASURE_OPTIONS = [
-  { value: 'blank', label: 'Whole blank' },
-  { value: 'nominal-hole', label: 'Bar to the middle hole' },
+  { value: 'blank', label: 'Blank = girth + allowance' },
+  { value: 'nominal-hole', label: 'Bar to middle hole = girth + allowance' },
+  { value: 'fixed', label: 'A fixed blank length' },
 ];
 
 /** The measurement, how the length is found, and the unit everything is shown in. */
-export function MeasureSection({ control, unit, disabled }: SectionProps) {
+export function MeasureSection({ control, unit, disabled, setValue }: SectionProps & { setValue: SpecSetValue }) {
   const mode = useWatch({ control, name: 'mode' });
+  const rule = useWatch({ control, name: 'rule' });
+  const ruleOff = disabled || mode !== 'rule';
+
+  // The rule's fields depend on what it measures: reshape it, keeping what carries over.
+  const reshape = (measure: string) => {
+    const allowanceMm = 'allowanceMm' in rule ? rule.allowanceMm : 0;
+    const blankMm = 'blankMm' in rule ? rule.blankMm : 100;
+    const next = measure === 'fixed' ? { measure: 'fixed' as const, blankMm } : { measure: measure as 'blank' | 'nominal-hole', allowanceMm };
+    setValue('rule', next, { shouldDirty: true, shouldValidate: true });
+  };
+
   return (
     <FormSection title="Measure">
       <LengthField control={control} name="girthMm" label="Girth" unit={unit} disabled={disabled} hint="Neck, waist or wrist, measured where it is worn." />
       <LengthField control={control} name="easeMm" label="Ease" unit={unit} disabled={disabled} hint="Room added in fit mode." />
       <SelectInput control={control} name="mode" label="Length from" options={MODE_OPTIONS} disabled={disabled} wrapperClassName="col-span-2" />
-      <SelectInput control={control} name="rule.measure" label="Rule measures" options={MEASURE_OPTIONS} disabled={disabled || mode !== 'rule'} />
-      <LengthField control={control} name="rule.allowanceMm" label="Rule allowance" unit={unit} disabled={disabled || mode !== 'rule'} />
+      <SelectInput control={control} name="rule.measure" label="The shop rule" options={MEASURE_OPTIONS} disabled={ruleOff} wrapperClassName="col-span-2" onChanged={reshape} />
+      {rule.measure === 'fixed' ? (
+        <LengthField key="blank" control={control} name="rule.blankMm" label="Rule blank length" unit={unit} disabled={ruleOff} />
+      ) : (
+        <LengthField key="allowance" control={control} name="rule.allowanceMm" label="Rule allowance" unit={unit} disabled={ruleOff} />
+      )}
       <SelectInput control={control} name="units" label="Show lengths in" options={UNIT_OPTIONS} disabled={disabled} />
-      <div className="flex items-end pb-2">
+      <div className="col-span-2">
         <CheckboxInput control={control} name="closes" label="Closes round the body" hint="Counts the thickness in the loop." disabled={disabled} />
       </div>
     </FormSection>

@@ -11,7 +11,7 @@ export function SpecFields({ control, setValue, disabled }: { control: SpecContr
   const props = { control, unit, disabled };
   return (
     <div className="grid gap-4">
-      <MeasureSection {...props} />
+      <MeasureSection {...props} setValue={setValue} />
       <LeatherSection {...props} setValue={setValue} />
       <StrapEndsSection {...props} />
       <HardwareSection {...props} />
