@@ -118,6 +118,20 @@ describe('the pattern library in the browser', () => {
     await expect.poll(() => blankText(page)).toBe('23 in');
   });
 
+  it('when the girth is not a length or is below the limit, then the field and the preview name it and saving waits', async () => {
+    const girth = page.getByLabel('Girth');
+    await girth.fill('thirteen');
+    await page.getByText('girth must be a number of mm').first().waitFor();
+    await expect(girth.getAttribute('aria-invalid')).resolves.toBe('true');
+    expect(await page.getByRole('button', { name: 'Save revision 3' }).isDisabled()).toBe(true);
+    // The schema's own limit, quoted from shared/schemas/strap-spec-limits.ts (GIRTH_MIN_MM = 50).
+    await girth.fill('1');
+    await page.getByTestId('draft-problems').getByText('girth must be at least 50 mm').waitFor();
+    await snap(page, 'library-05e-girth-refused');
+    await girth.fill('15');
+    await expect.poll(() => blankText(page)).toBe('23 in');
+  });
+
   it('when the preset values are loaded and the owner tries to leave, then the form is back at 13 in and leaving asks first', async () => {
     await page.getByRole('button', { name: 'Load preset values' }).click();
     await expect.poll(() => page.getByLabel('Girth').inputValue()).toBe('13');
