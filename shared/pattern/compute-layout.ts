@@ -13,6 +13,7 @@ import type { Feature, PatternLayout, PieceLayout, Warning } from './layout-type
 import { nearestPunch } from './punch.ts';
 import { ruleVsFit } from './rule-vs-fit.ts';
 import { layoutStitchRow } from './stitch.ts';
+import { pieceOutline } from './outline.ts';
 import { adjustmentHolesMm, fitReport, strapBlankMm, type LoopParts } from './strap-length.ts';
 import { widthProfile } from './width-profile.ts';
 import { roundLayoutNumbers } from './round-layout.ts';
@@ -59,8 +60,9 @@ function layoutPiece(spec: StrapSpec, piece: PieceSpec, index: number, lengthMm:
       throw new EngineError(`${field}`, `${f.label} at ${f.atMm.toFixed(1)} mm runs off the edge of the ${profile.at(f.atMm).toFixed(1)} mm strap`, `within the width`);
   }
   const warnings: Warning[] = [];
+  const outline = piece.stitchRows.length ? pieceOutline(profile, piece.start.shape, piece.end.shape) : [];
   const stitchRows = piece.stitchRows.flatMap((row, i) => {
-    const r = layoutStitchRow(row, profile, lengthMm, `${field}.stitchRows.${i}`, piece.id);
+    const r = layoutStitchRow(row, profile, outline, lengthMm, `${field}.stitchRows.${i}`, piece.id);
     warnings.push(...r.warnings);
     return r.rows;
   });

@@ -85,7 +85,9 @@ describe('engine properties (fast-check)', () => {
           const halfAt = (x: number) => {
             const st = p.widthStations;
             const i = st.findIndex((s) => s.atMm >= x);
-            if (i <= 0) return st[Math.max(0, i)]!.widthMm / 2;
+            // Past the last station (inside the end shape) the width stays the last station's.
+            if (i < 0) return st[st.length - 1]!.widthMm / 2;
+            if (i === 0) return st[0]!.widthMm / 2;
             const a = st[i - 1]!, b = st[i]!;
             return (a.widthMm + ((x - a.atMm) / (b.atMm - a.atMm || 1)) * (b.widthMm - a.widthMm)) / 2;
           };

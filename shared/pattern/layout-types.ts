@@ -82,7 +82,7 @@ export interface FitReport {
 
 /** A stitch row after pitch adjustment. */
 export interface StitchRowLayout {
-  /** Polyline of the row (mm, piece frame); holes land on every vertex. */
+  /** The row's ends and corners in order (mm, piece frame); a hole lands on each. The row itself follows the outline's offset, curves included. */
   points: { x: number; y: number }[];
   /** Each stitch hole's centre. */
   holes: { x: number; y: number }[];

@@ -87,13 +87,14 @@ function unwrapNear(a: number, ref: number): number {
   return v;
 }
 
-/**
- * Inset a closed clockwise chain by `d` mm (the edge guide a wing divider scribes). Lines move
- * along their normal, arcs keep their centre and change radius (exact offsets); where
- * neighbours no longer meet they are trimmed or extended to their intersection.
- */
-export function insetChain(prims: readonly Prim[], d: number): Prim[] {
-  const src = prims.map((p) => ({ orig: p, off: offsetPrim(p, d) })).filter((e) => e.off !== null) as { orig: Prim; off: Prim }[];
+/** True when trimming turned a primitive round (a chamfer or corner shorter than the offset). */
+function flipped(orig: Prim, off: Prim): boolean {
+  if (orig.type === 'line' && off.type === 'line') return (off.b.x - off.a.x) * (orig.b.x - orig.a.x) + (off.b.y - off.a.y) * (orig.b.y - orig.a.y) <= 0;
+  if (orig.type === 'arc' && off.type === 'arc') return (off.a1 - off.a0) * (orig.a1 - orig.a0) <= 0;
+  return false;
+}
+
+function joinNeighbours(src: readonly { orig: Prim; off: Prim }[]): Prim[] {
   const out = src.map((e) => e.off);
   const n = out.length;
   for (let i = 0; i < n; i++) {
@@ -109,4 +110,22 @@ export function insetChain(prims: readonly Prim[], d: number): Prim[] {
     out[j] = setStart(q, x);
   }
   return out;
+}
+
+/**
+ * Inset a closed clockwise chain by `d` mm (the edge guide a wing divider scribes, the line a
+ * stitch row follows). Lines move along their normal, arcs keep their centre and change
+ * radius (exact offsets); where neighbours no longer meet they are trimmed or extended to
+ * their intersection. A primitive that trimming turns round (a chamfer or a small corner
+ * radius shorter than the offset) has no part in the offset: it is dropped and its
+ * neighbours joined directly.
+ */
+export function insetChain(prims: readonly Prim[], d: number): Prim[] {
+  let src = prims.map((p) => ({ orig: p, off: offsetPrim(p, d) })).filter((e) => e.off !== null) as { orig: Prim; off: Prim }[];
+  for (;;) {
+    const out = joinNeighbours(src);
+    const bad = out.findIndex((p, i) => flipped(src[i]!.orig, p));
+    if (bad < 0 || src.length <= 3) return out;
+    src = src.filter((_, i) => i !== bad);
+  }
 }
