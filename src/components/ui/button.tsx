@@ -19,7 +19,7 @@ const sizes: Record<ButtonSize, string> = {
 /** Class string for things that look like buttons (links that act as actions). */
 export function buttonClass(variant: ButtonVariant = 'primary', size: ButtonSize = 'md', extra?: string): string {
   return cx(
-    'inline-flex items-center justify-center rounded-md font-medium transition-colors',
+    'inline-flex items-center justify-center whitespace-nowrap rounded-md font-medium transition-colors',
     'disabled:cursor-not-allowed disabled:opacity-55',
     variants[variant],
     sizes[size],

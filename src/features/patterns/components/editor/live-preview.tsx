@@ -1,4 +1,4 @@
-import { useDeferredValue, useMemo } from 'react';
+import { useDeferredValue, useEffect, useMemo, useState } from 'react';
 import { draftFrom } from '@/components/pattern/draft.ts';
 import { DrawingView } from '@/components/pattern/drawing-view.tsx';
 import { WarningsList } from '@/components/pattern/warnings-list.tsx';
@@ -16,18 +16,32 @@ import { formatLength } from '@shared/units/format-length.ts';
 export function LivePreview({ values, revisionLabel }: { values: unknown; revisionLabel?: string }) {
   const deferred = useDeferredValue(values);
   const draft = useMemo(() => draftFrom(deferred, revisionLabel ? { revision: revisionLabel } : {}), [deferred, revisionLabel]);
+  // While a value is being fixed, the last good drawing stays in view, faded, for orientation.
+  const [lastSvg, setLastSvg] = useState<string | null>(null);
+  useEffect(() => {
+    if (draft.status === 'drawn') setLastSvg(draft.svg);
+  }, [draft]);
 
   if (draft.status === 'stopped') {
     return (
-      <Notice tone="danger" title="The preview stopped at a value the engine cannot draw" role="status">
-        <ul className="list-disc pl-5" data-testid="draft-problems">
-          {draft.problems.map((p) => (
-            <li key={p.field + p.message}>
-              <code className="text-xs">{p.field}</code>: {p.message}
-            </li>
-          ))}
-        </ul>
-      </Notice>
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4">
+        <Notice tone="danger" title="The preview stopped at a value the engine cannot draw" role="status">
+          <ul className="list-disc pl-5" data-testid="draft-problems">
+            {draft.problems.map((p) => (
+              <li key={p.field + p.message}>
+                <code className="text-xs">{p.field}</code>: {p.message}
+              </li>
+            ))}
+          </ul>
+        </Notice>
+        {lastSvg && (
+          <Panel title="Last drawing that worked">
+            <div className="opacity-45 grayscale">
+              <DrawingView svg={lastSvg} label="The last drawing before the value the engine refused" />
+            </div>
+          </Panel>
+        )}
+      </div>
     );
   }
 
