@@ -1,3 +1,4 @@
+import { ROW } from './pack.ts';
 import type { PlannedPage, Seam } from './page-plan.ts';
 import { textMm } from './pdf-text.ts';
 import { mmToPt } from './units.ts';
@@ -25,8 +26,10 @@ export function drawSeamMarks(doc: PDFKit.PDFDocument, page: PlannedPage, seam: 
     if (pl.toXMm <= seam.overlapFromMm || pl.fromXMm >= seam.overlapToMm) continue;
     const x = seam.markXMm + pl.offsetXMm;
     // Letters sit beside the diamonds; keep their cap height inside the row (and the area).
+    // The line stops above the datum ruler: through it, mark and letter hid the ruler's
+    // numbers, and the ruler's own ticks already line up across the seam.
     const top = pl.clip.minY + 2.6;
-    const bottom = pl.clip.maxY - 1.2;
+    const bottom = pl.clip.maxY - ROW.rulerMm - 0.8;
     doc.lineWidth(mmToPt(0.2)).strokeColor(SEAM_COLOR).dash(mmToPt(1.5), { space: mmToPt(1) });
     doc.moveTo(mmToPt(x), mmToPt(top)).lineTo(mmToPt(x), mmToPt(bottom)).stroke();
     doc.undash();

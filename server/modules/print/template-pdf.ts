@@ -5,7 +5,8 @@ import { drawDatumRuler } from './datum-ruler.ts';
 import { fmtLength } from './format-length.ts';
 import { drawJobSheet, type JobSheet } from './job-sheet.ts';
 import { ROW, type PlanPiece } from './pack.ts';
-import { drawPagePlace } from './page-place.ts';
+import { drawPagePlace, type PlaceContext } from './page-place.ts';
+import { runLabels } from './run-labels.ts';
 import { FRAME, pageFrame } from './page-frame.ts';
 import { planPages, type PagePlan, type PlannedPage } from './page-plan.ts';
 import { addPageMm, createDoc, finishDoc } from './pdf-doc.ts';
@@ -68,7 +69,7 @@ function caption(doc: PDFKit.PDFDocument, piece: DrawingPiece, page: PlannedPage
   }
 }
 
-function drawPage(doc: PDFKit.PDFDocument, input: TemplateInput, plan: PagePlan, page: PlannedPage, caution: string): void {
+function drawPage(doc: PDFKit.PDFDocument, input: TemplateInput, plan: PagePlan, page: PlannedPage, caution: string, place: PlaceContext): void {
   const { drawing } = input;
   const f = plan.frame;
   addPageMm(doc, f.widthMm, f.heightMm);
@@ -85,7 +86,7 @@ function drawPage(doc: PDFKit.PDFDocument, input: TemplateInput, plan: PagePlan,
   const titleX = f.band.minX + SQUARE_BLOCK_MM + 2;
   drawTitleBlock(doc, drawing.title, f.band, titleX);
   const placeX = titleX + TITLE_BLOCK_MM + 4;
-  drawPagePlace(doc, plan, page, { ...f.band, minX: placeX });
+  drawPagePlace(doc, plan, page, { ...f.band, minX: placeX }, place);
   textMm(doc, caution, f.caution.minX, f.caution.maxY - 0.6, { capMm: 1.5, maxWidthMm: f.caution.maxX - f.caution.minX, color: '#222222' });
 }
 
@@ -103,9 +104,15 @@ export async function buildTemplatePdf(input: TemplateInput): Promise<Buffer> {
     ...(input.date ? { date: input.date } : {}),
   });
   const caution = cautionLine(cautionKind(input.kind ?? `${t.pattern} ${drawing.pieces.map((p) => p.name).join(' ')}`));
-  const total = plan.pages.length + (options.jobSheet && input.jobSheet ? 1 : 0);
+  const withJobSheet = options.jobSheet && input.jobSheet !== undefined;
+  const total = plan.pages.length + (withJobSheet ? 1 : 0);
+  const place: PlaceContext = {
+    total,
+    runLabels: runLabels(plan, drawing.pieces.map((p) => p.name)),
+    ...(withJobSheet ? { jobSheetPage: total } : {}),
+  };
   for (const page of plan.pages) {
-    drawPage(doc, input, plan, page, caution);
+    drawPage(doc, input, plan, page, caution, place);
     input.onProgress?.(page.number, total);
   }
   if (options.jobSheet && input.jobSheet) {
@@ -115,6 +122,10 @@ export async function buildTemplatePdf(input: TemplateInput): Promise<Buffer> {
     addPageMm(doc, jf.widthMm, jf.heightMm);
     drawJobSheet(doc, input.jobSheet, t, { widthMm: jf.widthMm, heightMm: jf.band.minY - FRAME.gapMm + options.marginMm, marginMm: options.marginMm });
     drawCalibration(doc, jf.band);
+    // It is counted in every sheet's "Page n of N", so it says its own number too.
+    const x = jf.band.minX + SQUARE_BLOCK_MM + 2;
+    textMm(doc, `Page ${total} of ${total}`, x, jf.band.minY + 4, { capMm: 3, weight: 'bold' });
+    textMm(doc, `job sheet · ${t.pattern}`, x, jf.band.minY + 8.6, { capMm: 2, maxWidthMm: jf.band.maxX - x });
     input.onProgress?.(total, total);
   }
   return finishDoc(doc);
