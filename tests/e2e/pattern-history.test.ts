@@ -255,7 +255,7 @@ describe('pattern history and sharing in the browser', () => {
     expect(names.slice(0, 2)).toEqual(['Casual belt, Tobias', 'Keeper 01']);
     expect(await page.getByRole('button', { name: 'Show more patterns' }).count()).toBe(0);
     await snap(page, 'history-14-library-pages');
-  });
+  }, 90_000);
 
   it('when each preset is opened in the editor, then the browser draws it without the preview stopping', async () => {
     for (const kind of PRESET_NAMES) {
@@ -269,5 +269,5 @@ describe('pattern history and sharing in the browser', () => {
       await page.getByText('No changes yet.').waitFor();
       await snap(page, `preset-${kind}`);
     }
-  });
+  }, 120_000);
 });
