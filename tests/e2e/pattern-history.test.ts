@@ -270,4 +270,16 @@ describe('pattern history and sharing in the browser', () => {
       await snap(page, `preset-${kind}`);
     }
   }, 120_000);
+
+  it('when a new pattern is started from old revision 1, then it opens on its own revision 1 with the 34 in waist of that revision', async () => {
+    await page.goto(`${server.url}/patterns/${id}/revisions/1`);
+    await page.getByRole('heading', { name: 'Revision 1' }).waitFor();
+    await page.getByTestId('drawing-preview').locator('svg').waitFor();
+    await snap(page, 'history-15-revision-view');
+    await page.getByRole('button', { name: 'New pattern from revision 1' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Casual belt, Tobias (copy)' }).waitFor();
+    expect(new URL(page.url()).pathname).not.toBe(`/patterns/${id}`);
+    await expect(page.getByTestId('head-revision').textContent()).resolves.toContain('Revision 1');
+    expect(await page.getByLabel('Girth').inputValue()).toBe('34');
+  });
 });

@@ -1,4 +1,8 @@
-import { Link, useParams, type LoaderFunction } from 'react-router-dom';
+import { Link, useNavigate, useParams, type LoaderFunction } from 'react-router-dom';
+import { can } from '@shared/schemas/permissions.ts';
+import { meQueryOptions } from '@/features/auth/api/queries.ts';
+import { RevisionActions } from '@/features/patterns/components/history/revision-actions.tsx';
+import { SharePanel } from '@/features/patterns/components/editor/share-panel.tsx';
 import { isSignedIn } from '@/features/auth/api/signed-in.ts';
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
 import { patternQueryOptions, revisionQueryOptions } from '@/features/patterns/api/queries.ts';
@@ -31,6 +35,10 @@ export function Component() {
   const n = numberFromParams(params.n);
   const { data: detail } = useSuspenseQuery(patternQueryOptions(id));
   const { data: revision } = useSuspenseQuery(revisionQueryOptions(id, n));
+  const { data: me } = useSuspenseQuery(meQueryOptions());
+  const navigate = useNavigate();
+  const canEdit = me ? can(me.role, 'revisions.restore') : false;
+  const canShare = me ? can(me.role, 'share.create') : false;
   return (
     <div className="grid gap-6">
       <PatternHeader pattern={detail.pattern} head={detail.head} tabs={patternTabs(id)} />
@@ -49,9 +57,28 @@ export function Component() {
       </div>
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_340px]">
         <LivePreview values={revision.spec} revisionLabel={String(revision.number)} />
-        <Panel title="Print and download">
-          <Downloads base={`/api/patterns/${id}/revisions/${n}`} kind={detail.pattern.kind} revisionNumber={n} />
-        </Panel>
+        <div className="grid gap-4">
+          {canEdit && (
+            <Panel title="Use this revision">
+              <RevisionActions
+                patternId={id}
+                number={n}
+                headNumber={detail.head.number}
+                headEtag={detail.etag}
+                onRestored={() => navigate(paths.patterns.detail.getHref(id))}
+                onDuplicated={(copy) => navigate(paths.patterns.detail.getHref(copy))}
+              />
+            </Panel>
+          )}
+          {canShare && (
+            <Panel title="Share read-only">
+              <SharePanel patternId={id} headNumber={n} />
+            </Panel>
+          )}
+          <Panel title="Print and download">
+            <Downloads base={`/api/patterns/${id}/revisions/${n}`} kind={detail.pattern.kind} revisionNumber={n} />
+          </Panel>
+        </div>
       </div>
     </div>
   );
