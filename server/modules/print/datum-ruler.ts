@@ -1,6 +1,7 @@
 import type { DrawingPiece } from '@shared/render/drawing.ts';
 import type { Placement } from './page-plan.ts';
 import { ROW } from './pack.ts';
+import { SEAM_CLEAR_MM } from './seam-marks.ts';
 import { textMm } from './pdf-text.ts';
 import { MM_PER_IN, mmToPt } from './units.ts';
 
@@ -34,7 +35,7 @@ export function rulerTicks(lengthMm: number, units: 'in' | 'mm'): Tick[] {
  * Draws a ruler under the piece from the datum (x = 0) to the blank's length, so any feature
  * and any seam can be checked against the printed distances with a real ruler.
  */
-export function drawDatumRuler(doc: PDFKit.PDFDocument, piece: DrawingPiece, pl: Placement, units: 'in' | 'mm'): void {
+export function drawDatumRuler(doc: PDFKit.PDFDocument, piece: DrawingPiece, pl: Placement, units: 'in' | 'mm', seamXs: readonly number[] = []): void {
   const y = pl.clip.maxY - ROW.rulerMm + 1;
   doc.save();
   doc.rect(mmToPt(pl.clip.minX), mmToPt(pl.clip.minY), mmToPt(pl.clip.maxX - pl.clip.minX), mmToPt(pl.clip.maxY - pl.clip.minY)).clip();
@@ -50,7 +51,10 @@ export function drawDatumRuler(doc: PDFKit.PDFDocument, piece: DrawingPiece, pl:
   }
   if (ticks.length > 0) doc.stroke();
   for (const t of ticks) {
-    if (t.label !== undefined) textMm(doc, t.label, t.atMm + pl.offsetXMm, y + t.lenMm + 2.2, { capMm: 1.7, anchor: 'middle', color: '#333333' });
+    const x = t.atMm + pl.offsetXMm;
+    // A seam's bottom letter and diamond sit in this line; the long tick still marks the place.
+    if (t.label === undefined || seamXs.some((s) => Math.abs(s - x) < SEAM_CLEAR_MM)) continue;
+    textMm(doc, t.label, x, y + t.lenMm + 2.2, { capMm: 1.7, anchor: 'middle', color: '#333333' });
   }
   const unitLabel = `${units} from datum 0`;
   if (pl.fromXMm <= 0) textMm(doc, unitLabel, pl.offsetXMm + 4, y + 5, { capMm: 1.5, color: '#555555' });

@@ -1,7 +1,15 @@
-import { ROW } from './pack.ts';
 import type { PlannedPage, Seam } from './page-plan.ts';
 import { textMm } from './pdf-text.ts';
 import { mmToPt } from './units.ts';
+
+/** Half-width kept free of ruler numbers round a seam mark, mm: letter, gap and diamond. */
+export const SEAM_CLEAR_MM = 6;
+
+/** Page x (mm) of the seam marks crossing a placement, for the ruler to keep clear. */
+export function seamXsOn(page: PlannedPage, pl: PlannedPage['placements'][number]): number[] {
+  if (!pl.tile) return [];
+  return [page.seamLeft, page.seamRight].filter((s): s is Seam => s !== undefined && pl.toXMm > s.overlapFromMm && pl.fromXMm < s.overlapToMm).map((s) => s.markXMm + pl.offsetXMm);
+}
 
 /** Colour of join marks: distinct from the black pattern lines, still dark in greyscale. */
 export const SEAM_COLOR = '#b0006a';
@@ -26,10 +34,10 @@ export function drawSeamMarks(doc: PDFKit.PDFDocument, page: PlannedPage, seam: 
     if (pl.toXMm <= seam.overlapFromMm || pl.fromXMm >= seam.overlapToMm) continue;
     const x = seam.markXMm + pl.offsetXMm;
     // Letters sit beside the diamonds; keep their cap height inside the row (and the area).
-    // The line stops above the datum ruler: through it, mark and letter hid the ruler's
-    // numbers, and the ruler's own ticks already line up across the seam.
+    // The bottom ones sit in the ruler's number line, the one line of the row the pattern's
+    // own labels never use; the ruler leaves its numbers out there (SEAM_CLEAR_MM).
     const top = pl.clip.minY + 2.6;
-    const bottom = pl.clip.maxY - ROW.rulerMm - 0.8;
+    const bottom = pl.clip.maxY - 1.2;
     doc.lineWidth(mmToPt(0.2)).strokeColor(SEAM_COLOR).dash(mmToPt(1.5), { space: mmToPt(1) });
     doc.moveTo(mmToPt(x), mmToPt(top)).lineTo(mmToPt(x), mmToPt(bottom)).stroke();
     doc.undash();

@@ -14,7 +14,7 @@ import { drawPlacement } from './pdf-draw.ts';
 import { textMm } from './pdf-text.ts';
 import { measuredBounds } from './text-bounds.ts';
 import type { PrintOptions } from './print-options.ts';
-import { drawSeamMarks } from './seam-marks.ts';
+import { drawSeamMarks, seamXsOn } from './seam-marks.ts';
 import { drawTitleBlock, TITLE_BLOCK_MM } from './title-block.ts';
 
 /** What a template PDF is built from. */
@@ -78,7 +78,7 @@ function drawPage(doc: PDFKit.PDFDocument, input: TemplateInput, plan: PagePlan,
     if (!piece) continue;
     caption(doc, piece, { ...page, placements: [pl] }, plan, drawing);
     drawPlacement(doc, piece, pl, LAYERS);
-    drawDatumRuler(doc, piece, pl, drawing.title.units);
+    drawDatumRuler(doc, piece, pl, drawing.title.units, seamXsOn(page, pl));
   }
   if (page.seamLeft) drawSeamMarks(doc, page, page.seamLeft, 'left');
   if (page.seamRight) drawSeamMarks(doc, page, page.seamRight, 'right');
