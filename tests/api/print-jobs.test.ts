@@ -118,6 +118,23 @@ describe('print jobs', () => {
     await pollJob(t.app, own.url, w.maker.cookie, 20);
   });
 
+  it('when one size of a saved run cannot be drawn, then the job ends failed naming the field, and its file answers 422 with the problem', async () => {
+    t = await createTestApp();
+    const w = await buildWorld(t);
+    // A 100 mm size: the collar preset's five tip holes 3/4 in apart need 152.4 mm (the engine's limit).
+    const spec = { ...w.collar.head.spec!, sizes: [RUN[0]!, { name: 'kitten', girthMm: 100 }] };
+    const saved = await request(t.app).post(`/api/patterns/${w.collar.pattern.id}/revisions`).set('Cookie', w.maker.cookie).set('If-Match', w.collar.etag).send({ spec, note: 'kitten size' });
+    expect(saved.status, JSON.stringify(saved.body)).toBe(201);
+    const job = await postJob(t.app, `/api/patterns/${w.collar.pattern.id}/revisions/2/print-jobs`, { size: 'all' }, w.maker.cookie);
+    const last = (await pollJob(t.app, job.url, w.maker.cookie, 20)).pop()!;
+    expect(last.state).toBe('failed');
+    expect(last.error?.code).toBe('invalid_input');
+    expect(last.error?.message).toMatch(/152\.4 mm/);
+    const file = await request(t.app).get(job.fileUrl).set('Cookie', w.maker.cookie).expect(422);
+    expect(file.body.error.message).toMatch(/tip holes/);
+    expect(Object.keys(file.body.error.fields ?? {}).length).toBeGreaterThan(0);
+  });
+
   it('when a finished job outlives its keep time, then it answers 404', async () => {
     const { t, w, jobs } = await world({ deps: { printJobs: { keepMs: 50 } } });
     const job = await postJob(t.app, jobs, { size: 'M' }, w.maker.cookie);
