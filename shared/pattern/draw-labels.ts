@@ -1,14 +1,68 @@
-import type { DrawingItem, TextItem } from '../render/drawing.ts';
+import type { BoxMm, DrawingItem, TextItem } from '../render/drawing.ts';
 
-/** Label font size (mm, cap to baseline) and the width factor used to estimate text extents. */
+/** Label font size (mm, em size: the SVG font-size) of feature and distance labels. */
 export const LABEL_SIZE_MM = 2.5;
+/** Font size (mm, em) of a piece's name. */
 export const NAME_SIZE_MM = 3.5;
-/** Average advance of a Plex Sans glyph as a fraction of the font size (estimate for bounds). */
+/**
+ * Advance of one character as a fraction of the em, for estimating extents without the font.
+ * Conservative for IBM Plex Sans: its digits advance 0.6 em and our labels average 0.43-0.53 em
+ * (measured with pdfkit on fonts/IBMPlexSans-Regular.ttf); only runs of W or m are wider.
+ */
 export const GLYPH_ADVANCE = 0.6;
+/** IBM Plex Sans ascender and descender per em (1025 and 275 of 1000 units, from the TTF). */
+export const ASCENT_PER_EM = 1.025;
+export const DESCENT_PER_EM = 0.275;
 
-/** Estimated length (mm) of a label set at `sizeMm`. */
+/** Estimated length (mm) of a label set at `sizeMm` (em). */
 export function textLengthMm(text: string, sizeMm: number): number {
   return [...text].length * sizeMm * GLYPH_ADVANCE;
+}
+
+/** Estimated box (mm) a label covers: its advance by the font's ascender and descender, turned by its rotation. */
+export function textBoxMm(t: TextItem): BoxMm {
+  const w = textLengthMm(t.text, t.sizeMm);
+  const x0 = t.anchor === 'middle' ? -w / 2 : t.anchor === 'end' ? -w : 0;
+  const corners: [number, number][] = [
+    [x0, -t.sizeMm * ASCENT_PER_EM],
+    [x0 + w, -t.sizeMm * ASCENT_PER_EM],
+    [x0, t.sizeMm * DESCENT_PER_EM],
+    [x0 + w, t.sizeMm * DESCENT_PER_EM],
+  ];
+  const a = ((t.rotateDeg ?? 0) * Math.PI) / 180;
+  const xs = corners.map(([x, y]) => t.x + x * Math.cos(a) - y * Math.sin(a));
+  const ys = corners.map(([x, y]) => t.y + x * Math.sin(a) + y * Math.cos(a));
+  return { minX: Math.min(...xs), maxX: Math.max(...xs), minY: Math.min(...ys), maxY: Math.max(...ys) };
+}
+
+/** Box (mm) holding every item: path points (Bézier control points included), circles, estimated text boxes. */
+export function itemsBounds(items: readonly DrawingItem[]): BoxMm {
+  const b: BoxMm = { minX: Infinity, minY: Infinity, maxX: -Infinity, maxY: -Infinity };
+  const add = (x: number, y: number) => {
+    b.minX = Math.min(b.minX, x);
+    b.maxX = Math.max(b.maxX, x);
+    b.minY = Math.min(b.minY, y);
+    b.maxY = Math.max(b.maxY, y);
+  };
+  for (const it of items) {
+    if (it.type === 'circle') {
+      add(it.cx - it.r, it.cy - it.r);
+      add(it.cx + it.r, it.cy + it.r);
+    } else if (it.type === 'text') {
+      const t = textBoxMm(it);
+      add(t.minX, t.minY);
+      add(t.maxX, t.maxY);
+    } else
+      for (const c of it.commands) {
+        if (c.op === 'Z') continue;
+        if (c.op === 'C') {
+          add(c.x1, c.y1);
+          add(c.x2, c.y2);
+        }
+        add(c.x, c.y);
+      }
+  }
+  return b;
 }
 
 /** A label item. */

@@ -82,13 +82,17 @@ describe('multi-piece patterns, loops and plain data', () => {
     }
   });
 
-  it('when a pattern is shown in mm, then labels are in mm; in inches, fractional inches', () => {
+  it('when a pattern is shown in mm, then distances are bare mm under a legend saying mm; in inches, fractional inches under one saying inches', () => {
     const mm = drawLayout(computeLayout(presetSpec('watch-strap')), presetSpec('watch-strap'));
     const texts = mm.pieces[0]!.items.flatMap((i) => (i.type === 'text' ? [i.text] : []));
-    expect(texts).toContain('12 mm');
+    expect(texts).toContain('12');
+    expect(texts.some((t) => t.startsWith('Distances in mm from 0 at the buckle end'))).toBe(true);
+    expect(texts.some((t) => /Ø2\.4 mm/.test(t))).toBe(true);
     const inch = drawLayout(computeLayout(presetSpec('collar')), presetSpec('collar'));
     const t2 = inch.pieces[0]!.items.flatMap((i) => (i.type === 'text' ? [i.text] : []));
-    expect(t2).toContain('1 1/2 in');
-    expect(t2).toContain('3 3/4 in');
+    expect(t2).toContain('1 1/2');
+    expect(t2).toContain('3 3/4');
+    expect(t2.some((t) => t.startsWith('Distances in inches from 0 at the buckle end'))).toBe(true);
+    expect(t2).toContain('2 x Ø1/8 in #3 rivet, 2 layers');
   });
 });

@@ -116,8 +116,8 @@ describe('stitch rows along the whole outline (fast-check)', () => {
           expect(row.threadMm).toBeCloseTo(4 * row.seamLengthMm, 6);
         }
       }),
-      { numRuns: 600, seed: 20261202 },
+      { numRuns: 400, seed: 20261202 },
     );
-    expect(rowsChecked).toBeGreaterThan(200);
+    expect(rowsChecked).toBeGreaterThan(150);
   });
 });

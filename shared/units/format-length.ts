@@ -25,3 +25,11 @@ export function formatMm(mm: number): string {
   const s = t.endsWith('.0') ? t.slice(0, -2) : t;
   return s === '-0' ? '0' : s;
 }
+
+/**
+ * A length as {@link formatLength} writes it but without the unit ("1 1/2", "30.2"), for
+ * drawings whose legend names the unit once.
+ */
+export function formatLengthBare(mm: number, unit: LengthUnit): string {
+  return formatLength(mm, unit).replace(/ (in|mm)$/, '');
+}
