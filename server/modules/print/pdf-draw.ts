@@ -1,6 +1,6 @@
 import { replayPath, type DrawingItem, type DrawingPiece, type LayerName, type PathSink } from '@shared/render/drawing.ts';
 import type { Placement } from './page-plan.ts';
-import { textMm } from './pdf-text.ts';
+import { PLEX_CAP_PER_EM, textMm } from './pdf-text.ts';
 import { mmToPt } from './units.ts';
 
 /** Stroke per layer, mm. Renderers style by layer, never by item (drawing.ts). */
@@ -46,8 +46,9 @@ function strokeLayer(doc: PDFKit.PDFDocument, layer: Exclude<LayerName, 'label'>
 function drawItem(doc: PDFKit.PDFDocument, item: DrawingItem, ox: number, oy: number): void {
   const map = (x: number, y: number): [number, number] => [mmToPt(x + ox), mmToPt(y + oy)];
   if (item.type === 'text') {
+    // sizeMm is the em, as SVG's font-size (the Drawing contract), so print and preview match.
     textMm(doc, item.text, item.x + ox, item.y + oy, {
-      capMm: item.sizeMm,
+      capMm: item.sizeMm * PLEX_CAP_PER_EM,
       anchor: item.anchor,
       weight: item.weight ?? 'regular',
       ...(item.rotateDeg ? { rotateDeg: item.rotateDeg } : {}),
@@ -69,10 +70,10 @@ function drawItem(doc: PDFKit.PDFDocument, item: DrawingItem, ox: number, oy: nu
 export function itemSpanX(item: DrawingItem): [number, number] {
   if (item.type === 'circle') return [item.cx - item.r, item.cx + item.r];
   if (item.type === 'text') {
-    // Plex advances are under 0.75 em; the em is sizeMm / 0.698. Turned text spans its height.
-    const len = item.text.length * (item.sizeMm / 0.698) * 0.75;
+    // Plex advances are under 0.75 em (the em is sizeMm). Turned text spans its height.
+    const len = item.text.length * item.sizeMm * 0.75;
     const turned = item.rotateDeg !== undefined && Math.abs(Math.abs(item.rotateDeg % 180) - 90) < 1e-6;
-    if (turned) return [item.x - item.sizeMm * 2, item.x + item.sizeMm * 2];
+    if (turned) return [item.x - item.sizeMm * 1.4, item.x + item.sizeMm * 1.4];
     if (item.rotateDeg) return [item.x - len, item.x + len];
     if (item.anchor === 'start') return [item.x, item.x + len];
     if (item.anchor === 'end') return [item.x - len, item.x];

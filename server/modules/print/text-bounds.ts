@@ -1,7 +1,6 @@
 import PDFDocument from 'pdfkit';
 import type { BoxMm, DrawingPiece, TextItem } from '@shared/render/drawing.ts';
 import { FONT, FONT_FILES } from './pdf-doc.ts';
-import { PLEX_CAP_PER_EM } from './pdf-text.ts';
 import { mmToPt } from './units.ts';
 
 // A document never written out, used only to measure text with the fonts we embed.
@@ -22,7 +21,7 @@ const DESCENT = 0.275;
 /** The box a label covers on the page, mm, measured with the embedded Plex metrics. */
 export function textBox(t: TextItem): BoxMm {
   const d = doc();
-  const em = t.sizeMm / PLEX_CAP_PER_EM;
+  const em = t.sizeMm; // the em, as SVG's font-size (shared/render/drawing.ts)
   d.font(t.weight === 'bold' ? FONT.bold : FONT.regular).fontSize(mmToPt(em));
   const w = d.widthOfString(t.text) / mmToPt(1);
   const x0 = t.anchor === 'middle' ? -w / 2 : t.anchor === 'end' ? -w : 0;
