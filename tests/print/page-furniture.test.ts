@@ -66,7 +66,7 @@ describe('page furniture', () => {
     expect(plan.seams.length).toBeGreaterThan(0);
   });
 
-  it('when a job sheet covers a five-size run, then its cutting step names no single blank length and the punch step counts per strap', () => {
+  it('when a job sheet covers a five-size run, then its cutting step names no single blank length and punches, rivets and hardware count per strap', () => {
     const spec = presetSpec('collar');
     const run = RUN.map((s) => {
       const sized = { ...spec, girthMm: s.girthMm };
@@ -77,5 +77,8 @@ describe('page furniture', () => {
     expect(cut).toEqual(['Cut the blanks of all 5 sizes (the cut list), each along its own outline; mark each with its size.']);
     expect(sheet.cutList.map((c) => c.piece)).toEqual(RUN.map((s) => `Collar, size ${s.name}`));
     expect(sheet.steps.filter((s) => s.startsWith('Punch')).every((s) => s.includes('per strap'))).toBe(true);
+    expect(sheet.punches.length).toBeGreaterThan(0);
+    for (const p of sheet.punches) expect(p.what).toMatch(/per strap$/);
+    for (const r of sheet.rivets) expect(r.where).toMatch(/per strap$/);
   });
 });

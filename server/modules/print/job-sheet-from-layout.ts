@@ -56,5 +56,13 @@ export function jobSheetFromRun(run: readonly { size?: string; layout: PatternLa
   if (run.length === 1) return base;
   const cutList = run.flatMap((r) => jobSheetFromLayout(r.layout).cutList.map((c) => ({ ...c, piece: `${c.piece}, size ${r.size ?? ''}`.trim() })));
   const warnings = run.flatMap((r) => r.layout.warnings.map((w) => `size ${r.size ?? ''}: ${w.message}`));
-  return { ...base, cutList, hardware: base.hardware.map((h) => `${h} per strap`), warnings };
+  // Hardware, rivets and punches are counted for one strap; say so, the run makes several.
+  return {
+    ...base,
+    cutList,
+    hardware: base.hardware.map((h) => `${h} per strap`),
+    rivets: base.rivets.map((r) => ({ ...r, where: `${r.where} per strap` })),
+    punches: base.punches.map((p) => ({ ...p, what: `${p.what} per strap` })),
+    warnings,
+  };
 }
