@@ -5,6 +5,7 @@ import { WarningsList } from '@/components/pattern/warnings-list.tsx';
 import { FitTable } from '@/components/pattern/fit-table.tsx';
 import { RuleVsFitPanel } from '@/components/pattern/rule-vs-fit.tsx';
 import { CutListView } from '@/components/pattern/cut-list.tsx';
+import { gradeRun, SizeRunTable } from '@/components/pattern/size-run.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { Panel } from '@/components/ui/panel.tsx';
 import { formatLength } from '@shared/units/format-length.ts';
@@ -18,6 +19,8 @@ export function LivePreview({ values, revisionLabel }: { values: unknown; revisi
   const draft = useMemo(() => draftFrom(deferred, revisionLabel ? { revision: revisionLabel } : {}), [deferred, revisionLabel]);
   // While a value is being fixed, the last good drawing stays in view, faded, for orientation.
   const [lastSvg, setLastSvg] = useState<string | null>(null);
+  // One layout per size: graded only when the drawn spec changes.
+  const run = useMemo(() => (draft.status === 'drawn' ? gradeRun(draft.spec) : null), [draft]);
   useEffect(() => {
     if (draft.status === 'drawn') setLastSvg(draft.svg);
   }, [draft]);
@@ -63,6 +66,17 @@ export function LivePreview({ values, revisionLabel }: { values: unknown; revisi
       >
         <DrawingView svg={draft.svg} label={`Drawing of ${layout.name || 'the pattern'}`} />
       </Panel>
+      {run && (
+        <Panel title={`Size run (${draft.spec.sizes.length})`}>
+          {run.status === 'graded' ? (
+            <SizeRunTable report={run.report} unit={unit} />
+          ) : (
+            <Notice tone="danger" role="status">
+              <code className="text-xs">{run.field}</code>: {run.message}
+            </Notice>
+          )}
+        </Panel>
+      )}
       <WarningsList warnings={layout.warnings} />
       {layout.fit && (
         <Panel title="Fit at each hole">

@@ -2,6 +2,7 @@ import { useWatch } from 'react-hook-form';
 import { HardwareSection } from './hardware-section.tsx';
 import { LeatherSection } from './leather-section.tsx';
 import { MeasureSection } from './measure-section.tsx';
+import { SizesSection } from './sizes-section.tsx';
 import { StrapEndsSection } from './strap-ends-section.tsx';
 import type { SpecControl, SpecSetValue } from './types.ts';
 
@@ -13,8 +14,9 @@ export function SpecFields({ control, setValue, disabled }: { control: SpecContr
     <div className="grid gap-4">
       <MeasureSection {...props} setValue={setValue} />
       <LeatherSection {...props} setValue={setValue} />
-      <StrapEndsSection {...props} />
+      <StrapEndsSection {...props} setValue={setValue} />
       <HardwareSection {...props} />
+      <SizesSection {...props} />
     </div>
   );
 }

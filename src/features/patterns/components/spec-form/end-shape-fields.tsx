@@ -1,0 +1,74 @@
+import { useWatch, type FieldPath } from 'react-hook-form';
+import type { EndShape, StrapSpecInput } from '@shared/schemas/strap-spec.ts';
+import { LengthField } from '@/components/form/length-field.tsx';
+import { SelectInput } from '@/components/form/select-input.tsx';
+import type { SectionProps, SpecSetValue } from './types.ts';
+
+const SHAPES = [
+  { value: 'square', label: 'Square' },
+  { value: 'round', label: 'Round' },
+  { value: 'clipped', label: 'Clipped corners' },
+  { value: 'english-point', label: 'English point' },
+  { value: 'spear', label: 'Spear' },
+];
+
+/** Each shape's one parameter: the spec key and the label a maker reads. */
+const PARAMETER: Record<EndShape['kind'], { key: 'radiusMm' | 'chamferMm' | 'depthMm'; label: string; hint?: string } | null> = {
+  square: null,
+  round: { key: 'radiusMm', label: 'Corner radius', hint: 'Half the width is a semicircle.' },
+  clipped: { key: 'chamferMm', label: 'Chamfer', hint: 'Cut along both edges at each corner.' },
+  'english-point': { key: 'depthMm', label: 'Point depth', hint: 'At least half the width.' },
+  spear: { key: 'depthMm', label: 'Point depth' },
+};
+
+/**
+ * A new shape keeps what carries over (a point depth between English point and spear) and
+ * otherwise starts from a value the engine draws for this width.
+ */
+export function reshapeEnd(current: EndShape | undefined, next: EndShape['kind'], widthMm: number): EndShape {
+  const half = Math.round((widthMm / 2) * 1000) / 1000;
+  const depth = current && 'depthMm' in current ? Math.max(current.depthMm, half) : Math.round(widthMm * 0.75 * 1000) / 1000;
+  switch (next) {
+    case 'square':
+      return { kind: 'square' };
+    case 'round':
+      return { kind: 'round', radiusMm: half };
+    case 'clipped':
+      return { kind: 'clipped', chamferMm: Math.round((widthMm / 4) * 1000) / 1000 };
+    case 'english-point':
+      return { kind: 'english-point', depthMm: depth };
+    case 'spear':
+      return { kind: 'spear', depthMm: depth };
+  }
+}
+
+/** Shape select and its parameter for one end of the strap piece (`end` is "start" or "end"). */
+export function EndShapeFields({ control, unit, disabled, setValue, index, end, what }: SectionProps & { setValue: SpecSetValue; index: number; end: 'start' | 'end'; what: string }) {
+  const shape = useWatch({ control, name: `pieces.${index}.${end}.shape` }) as EndShape | undefined;
+  const pieceWidth = useWatch({ control, name: `pieces.${index}.widthMm` });
+  const width = useWatch({ control, name: 'widthMm' });
+  const kind = shape?.kind ?? 'square';
+  const parameter = PARAMETER[kind];
+  const onChanged = (next: string) => {
+    const w = Number.isFinite(pieceWidth) && pieceWidth ? pieceWidth : width;
+    setValue(`pieces.${index}.${end}.shape`, reshapeEnd(shape, next as EndShape['kind'], w), { shouldDirty: true, shouldValidate: true });
+  };
+  return (
+    <>
+      <SelectInput control={control} name={`pieces.${index}.${end}.shape.kind`} label={`${what} shape`} options={SHAPES} disabled={disabled} onChanged={onChanged} />
+      {parameter ? (
+        <LengthField
+          key={kind}
+          control={control}
+          name={`pieces.${index}.${end}.shape.${parameter.key}` as FieldPath<StrapSpecInput>}
+          label={parameter.label}
+          unit={unit}
+          disabled={disabled}
+          {...(parameter.hint ? { hint: parameter.hint } : {})}
+        />
+      ) : (
+        <p className="self-end pb-2 text-xs text-hide-600">A square end has no parameter.</p>
+      )}
+    </>
+  );
+}
