@@ -4,6 +4,7 @@ import { formatLength } from '../units/format-length.ts';
 import { thicknessMm } from '../units/length.ts';
 import { centrelineFromInnerMm } from './bend.ts';
 import { cutList } from './cut-list.ts';
+import { placeDRings } from './d-rings.ts';
 import { checkShape } from './end-shape.ts';
 import { attachFromEndMm, placeEnd } from './end-features.ts';
 import { EngineError } from './engine-error.ts';
@@ -112,6 +113,9 @@ export function computeLayout(spec: StrapSpec): PatternLayout {
   const strapLayout = laid[strapIdx]!.layout;
   const fit = fitReport(spec, strap, strapL, parts);
   strapLayout.fit = fit;
+  const rings = placeDRings(spec, strapLayout, strap.start.kind === 'fold-over');
+  if (rings.placements.length) strapLayout.hardware = rings.placements;
+  strapLayout.warnings.push(...rings.warnings);
   const pieces = laid.map((l) => l.layout);
   const keeper = pieces.find((p) => p.role === 'accessory');
   const warnings = [...pieces.flatMap((p) => p.warnings), ...patternWarnings(spec, strapLayout, fit, laid[strapIdx]!.profile, t, keeper?.widthMm ?? 9.5)];

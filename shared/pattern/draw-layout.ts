@@ -1,5 +1,6 @@
 import type { Drawing, DrawingItem, DrawingPiece, PathCommand } from '../render/drawing.ts';
 import type { StrapSpec } from '../schemas/strap-spec.ts';
+import { formatLength, formatLengthBare } from '../units/format-length.ts';
 import { itemsBounds } from './draw-labels.ts';
 import { pieceLabels } from './feature-labels.ts';
 import type { Feature, PatternLayout, PieceLayout } from './layout-types.ts';
@@ -71,7 +72,24 @@ function drawPiece(spec: StrapSpec, piece: PieceLayout, withLabels: boolean): Dr
     if (f.kind !== 'fold') items.push(cross(f.atMm, f.yMm));
   }
   for (const row of piece.stitchRows) for (const h of row.holes) items.push({ type: 'circle', layer: 'punch', cx: h.x, cy: h.y, r: STITCH_R_MM });
-  if (withLabels) items.push(...pieceLabels(piece, ps, u).items);
+  // Hardware that rides on the piece: a guide-layer mark where each ring's bar lies across the strap.
+  const rings = piece.hardware ?? [];
+  for (const r of rings) {
+    const h = Math.min(profile.at(r.atMm), r.insideWidthMm) / 2;
+    items.push({ type: 'path', layer: 'guide', dashed: true, commands: [{ op: 'M', x: r.atMm, y: -h }, { op: 'L', x: r.atMm, y: h }] });
+  }
+  if (withLabels) {
+    const first = rings[0];
+    const extra = first
+      ? {
+          above: [{ atMm: rings.reduce((a, r) => a + r.atMm, 0) / rings.length, text: `${rings.length > 1 ? `${rings.length} x ` : ''}D-ring in fold loop` }],
+          caption: [
+            `D-ring${rings.length > 1 ? 's' : ''}: ${rings.length} x ${formatLength(first.insideWidthMm, u)} inside, ${formatLength(first.wireDiameterMm, u)} wire, ${first.note}; bar${rings.length > 1 ? 's' : ''} at ${rings.map((r) => formatLengthBare(r.atMm, u)).join(' and ')} (dashed).`,
+          ],
+        }
+      : {};
+    items.push(...pieceLabels(piece, ps, u, extra).items);
+  }
   const b = itemsBounds(items);
   return {
     id: piece.id,

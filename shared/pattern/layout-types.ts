@@ -56,7 +56,8 @@ export type WarningCode =
   | 'tail-short'
   | 'fit-misses-target'
   | 'blank-longer-than-strip'
-  | 'stitch-pitch-off';
+  | 'stitch-pitch-off'
+  | 'd-ring-no-room';
 
 /** Fit at one adjustment hole. */
 export interface HoleFit {
@@ -93,6 +94,19 @@ export interface StitchRowLayout {
   threadMm: number;
 }
 
+/** Hardware that rides on a piece (not cut or punched): a D-ring in the buckle-end fold. */
+export interface HardwarePlacement {
+  item: 'D-ring';
+  /** Where the ring's straight bar lies across the strap, mm from the datum (body side of the fold). */
+  atMm: number;
+  insideWidthMm: number;
+  wireDiameterMm: number;
+  /** The stretch of the fold loop the ring may ride in, mm from the datum. */
+  zoneMm: [number, number];
+  /** How sure the placement is ("from memory", "common practice"). */
+  note: string;
+}
+
 /** One piece laid out. */
 export interface PieceLayout {
   id: string;
@@ -110,6 +124,8 @@ export interface PieceLayout {
   /** Length the tip/start shapes take at each end, mm (0 for square). */
   shapeDepthMm: { start: number; end: number };
   fit?: FitReport;
+  /** Hardware that rides on this piece (the strap's D-rings), when there is any. */
+  hardware?: HardwarePlacement[];
   warnings: Warning[];
 }
 

@@ -4,7 +4,8 @@ import type { StrapSpec } from '../../schemas/strap-spec.ts';
  * Two-piece watch strap, mm (common practice): 20 mm lugs tapering to an 18 mm buckle;
  * regular lengths about 120 mm long / 75 mm short, visible from the spring bar. Each piece
  * folds round its spring bar (1.8 mm); the short piece also folds round the buckle bar
- * through a tongue slot. Both stitched along the edges with a 3.85 mm iron.
+ * through a tongue slot. Both stitched along the edges with a 3.85 mm iron. One keeper, cut
+ * here as its own piece.
  */
 export function watchStrapPreset(): StrapSpec {
   const lugFold = { kind: 'fold-over' as const, foldAtMm: 12, barDiameterMm: 1.8, slot: null, flapHoles: [], bodyHoles: [], shape: { kind: 'square' as const } };
@@ -64,6 +65,19 @@ export function watchStrapPreset(): StrapSpec {
           { atMm: 24, from: 'end', widthMm: 20 },
         ],
         stitchRows: [{ ...stitch, fromMm: 31, fromRef: 'start', toMm: 26, toRef: 'end' }],
+      },
+      {
+        // The keeper round both pieces' ends where the tail tucks in, butted and glued (from memory).
+        id: 'keeper',
+        name: 'Keeper',
+        role: 'accessory',
+        count: 1,
+        length: { kind: 'keeper', layers: 2, easeMm: 1, overlapMm: 0 },
+        widthMm: 6,
+        start: { kind: 'plain', holes: [], shape: { kind: 'square' } },
+        end: { kind: 'plain', holes: [], shape: { kind: 'square' } },
+        taper: [],
+        stitchRows: [],
       },
     ],
   };
