@@ -27,8 +27,10 @@ export default defineConfig({
     root: here('.'),
     include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'tests/**/*.test.{ts,tsx}'],
     environment: 'node',
-    testTimeout: 30_000,
-    hookTimeout: 60_000,
+    // Generous: a timeout here only guards against hangs (2 cores, Chromium and PDF work in
+    // parallel forks); speed is measured in `npm run bench`, never in tests.
+    testTimeout: 120_000,
+    hookTimeout: 180_000,
     // 2 cores: e2e files start Chromium; keep files in separate forks but few at once.
     pool: 'forks',
     maxWorkers: 2,

@@ -56,3 +56,15 @@ describe('size runs in print downloads', () => {
     expect(Object.keys(res.body.error.fields ?? {}).join(' ')).toMatch(/sizes/);
   });
 });
+
+describe('size runs on save', () => {
+  it('when a size is too small for the tip holes to fit, then the save is refused naming that size and nothing is stored', async () => {
+    // 100 mm is above the schema's girth minimum but leaves no room for five holes 3/4 in apart.
+    const spec = { ...w.collar.head.spec!, sizes: [run[2]!, { name: 'kitten', girthMm: 100 }] };
+    const res = await request(t.app).post(`/api/patterns/${w.collar.pattern.id}/revisions`).set('Cookie', w.maker.cookie).set('If-Match', w.collar.etag).send({ spec, note: 'with a kitten size' }).expect(400);
+    expect(res.body.error.fields).toHaveProperty(['spec.sizes.1.girthMm']);
+    expect(res.body.error.fields['spec.sizes.1.girthMm']).toMatch(/size kitten/);
+    const revisions = await request(t.app).get(`/api/patterns/${w.collar.pattern.id}/revisions`).set('Cookie', w.maker.cookie).expect(200);
+    expect(revisions.body.items).toHaveLength(1);
+  });
+});

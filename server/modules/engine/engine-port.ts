@@ -8,18 +8,35 @@ import type { Drawing } from '@shared/render/drawing.ts';
 import type { StrapSpec } from '@shared/schemas/strap-spec.ts';
 import { badInput } from '../../http/http-error.ts';
 
-/** Layout of `spec`; an EngineError becomes 400 with the field `${prefix}.${field}`. */
-export function layoutOrBadInput(spec: StrapSpec, prefix = 'spec'): PatternLayout {
-  try {
-    return computeLayout(spec);
-  } catch (err) {
-    if (err instanceof EngineError) {
-      const field = `${prefix}.${err.field}`;
-      const limit = err.limit ? ` (limit: ${err.limit})` : '';
-      throw badInput({ [field]: `${field}: ${err.message}${limit}` });
-    }
-    throw err;
+function engineErrorToBadInput(err: unknown, field: (e: EngineError) => string, lead = ''): never {
+  if (err instanceof EngineError) {
+    const name = field(err);
+    const limit = err.limit ? ` (limit: ${err.limit})` : '';
+    throw badInput({ [name]: `${name}: ${lead}${err.message}${limit}` });
   }
+  throw err;
+}
+
+/**
+ * Layout of `spec`; an EngineError becomes 400 with the field `${prefix}.${field}`. Every size
+ * of the spec's size run is laid out too, so a revision that saves is a revision that prints:
+ * a size the engine cannot draw is refused naming `${prefix}.sizes.N.girthMm`.
+ */
+export function layoutOrBadInput(spec: StrapSpec, prefix = 'spec'): PatternLayout {
+  let layout: PatternLayout;
+  try {
+    layout = computeLayout(spec);
+  } catch (err) {
+    engineErrorToBadInput(err, (e) => `${prefix}.${e.field}`);
+  }
+  (spec.sizes ?? []).forEach((size, i) => {
+    try {
+      computeLayout({ ...spec, girthMm: size.girthMm });
+    } catch (err) {
+      engineErrorToBadInput(err, () => `${prefix}.sizes.${i}.girthMm`, `size ${size.name}: `);
+    }
+  });
+  return layout;
 }
 
 /** Layout and Drawing of a stored spec, labelled with the revision for the title block. */
