@@ -43,6 +43,23 @@ function demoPatterns(): DemoPattern[] {
       ],
     },
     {
+      name: 'Shop stock collars, XS to XL',
+      tags: ['dog', 'stock'],
+      createdBy: 'maren@harrowfinch.example',
+      revisions: [
+        {
+          by: 'maren@harrowfinch.example',
+          note: 'Graded run for the market stall: loose neck 10 to 18 in.',
+          spec: {
+            ...collar,
+            name: 'Stock collar',
+            sizes: ['XS', 'S', 'M', 'L', 'XL'].map((name, i) => ({ name, girthMm: (10 + 2 * i) * INCH_MM })),
+          },
+          daysAgo: 12,
+        },
+      ],
+    },
+    {
       name: 'Watch strap, 20 mm lugs',
       tags: ['watch'],
       createdBy: 'tobias@harrowfinch.example',
@@ -76,6 +93,7 @@ export async function seed(knex: Knex): Promise<void> {
         // Demo data must be what the app itself would accept: schema-valid and drawable.
         const spec = parseSpec(r.spec);
         computeLayout(spec);
+        for (const size of spec.sizes) computeLayout({ ...spec, girthMm: size.girthMm });
         await trx('revisions').insert({
           pattern_id: row!.id,
           number: i + 1,

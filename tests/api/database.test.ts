@@ -68,7 +68,7 @@ describe('demo seed', () => {
       await seedPatterns(t.db);
     }
     const patterns = await t.db('patterns').orderBy('name');
-    expect(patterns.map((p) => p.name)).toEqual(['Belt, order 1043 (Ed Marsh)', "Juniper's collar", 'Watch strap, 20 mm lugs']);
+    expect(patterns.map((p) => p.name)).toEqual(['Belt, order 1043 (Ed Marsh)', "Juniper's collar", 'Shop stock collars, XS to XL', 'Watch strap, 20 mm lugs']);
     for (const p of patterns) {
       const numbers = await t.db('revisions').where({ pattern_id: p.id }).orderBy('number').pluck('number');
       expect(numbers).toEqual(Array.from({ length: p.head_number }, (_, i) => i + 1));
