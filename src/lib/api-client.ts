@@ -49,7 +49,8 @@ function normaliseFields(raw: unknown): FieldErrors | undefined {
   return Object.keys(out).length > 0 ? out : undefined;
 }
 
-async function readBody(res: Response): Promise<unknown> {
+/** The body of an answer: JSON, text, or nothing. */
+export async function readBody(res: Response): Promise<unknown> {
   if (res.status === 204) return undefined;
   const type = res.headers.get('content-type') ?? '';
   if (type.includes('json')) return res.json();
@@ -57,7 +58,8 @@ async function readBody(res: Response): Promise<unknown> {
   return text.length > 0 ? text : undefined;
 }
 
-function toApiError(res: Response, body: unknown): ApiError {
+/** The server's error body of a failed answer as an {@link ApiError}. */
+export function toApiError(res: Response, body: unknown): ApiError {
   const err = (body as { error?: { code?: unknown; message?: unknown; fields?: unknown } } | undefined)?.error;
   const code = typeof err?.code === 'string' ? err.code : `http_${res.status}`;
   const message =

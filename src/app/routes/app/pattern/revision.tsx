@@ -1,3 +1,4 @@
+import type { StrapSpec } from '@shared/schemas/strap-spec.ts';
 import { Link, useNavigate, useParams, type LoaderFunction } from 'react-router-dom';
 import { can } from '@shared/schemas/permissions.ts';
 import { meQueryOptions } from '@/features/auth/api/queries.ts';
@@ -37,6 +38,7 @@ export function Component() {
   const { data: revision } = useSuspenseQuery(revisionQueryOptions(id, n));
   const { data: me } = useSuspenseQuery(meQueryOptions());
   const navigate = useNavigate();
+  const revisionSpec = revision.spec as StrapSpec;
   const canEdit = me ? can(me.role, 'revisions.restore') : false;
   const canShare = me ? can(me.role, 'share.create') : false;
   return (
@@ -76,7 +78,13 @@ export function Component() {
             </Panel>
           )}
           <Panel title="Print and download">
-            <Downloads base={`/api/patterns/${id}/revisions/${n}`} kind={detail.pattern.kind} revisionNumber={n} />
+            <Downloads
+              base={`/api/patterns/${id}/revisions/${n}`}
+              kind={detail.pattern.kind}
+              revisionNumber={n}
+              unit={revisionSpec.units}
+              sizes={(revisionSpec.sizes ?? []).map((s) => s.name)}
+            />
           </Panel>
         </div>
       </div>

@@ -36,6 +36,8 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
   const [conflict, setConflict] = useState<(Conflict & { detail: PatternDetail }) | null>(null);
   const [error, setError] = useState<string>();
   const [savedNumber, setSavedNumber] = useState<number | null>(null);
+  // The files are of the revision the form is based on: its unit and its size run.
+  const [savedSpec, setSavedSpec] = useState<{ units: StrapSpec['units']; sizes: StrapSpec['sizes'] }>({ units: spec.units, sizes: spec.sizes ?? [] });
   const save = useSaveRevision(id);
   const fetchLatest = useFetchLatest(id);
 
@@ -52,6 +54,8 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
       setBase({ etag: saved.etag, number: saved.head.number });
       form.reset(saved.head.spec as StrapSpecInput);
       setSavedNumber(saved.head.number);
+      const head = saved.head.spec as StrapSpec;
+      setSavedSpec({ units: head.units, sizes: head.sizes ?? [] });
       return true;
     } catch (err) {
       if (isApiError(err, 412)) {
@@ -113,11 +117,15 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
                   onKeepMine={() => {
                     if (!conflict) return;
                     setBase({ etag: conflict.detail.etag, number: conflict.number });
+                    const head = conflict.detail.head.spec as StrapSpec;
+                    setSavedSpec({ units: head.units, sizes: head.sizes ?? [] });
                     setConflict(null);
                   }}
                   onTakeTheirs={() => {
                     if (!conflict) return;
                     setBase({ etag: conflict.detail.etag, number: conflict.number });
+                    const theirs = conflict.detail.head.spec as StrapSpec;
+                    setSavedSpec({ units: theirs.units, sizes: theirs.sizes ?? [] });
                     form.reset(conflict.detail.head.spec as StrapSpecInput);
                     setConflict(null);
                   }}
@@ -135,6 +143,8 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
               base={`/api/patterns/${id}/revisions/${base.number}`}
               kind={detail.pattern.kind}
               revisionNumber={base.number}
+              unit={savedSpec.units}
+              sizes={savedSpec.sizes.map((s) => s.name)}
               dirty={form.formState.isDirty}
             />
           </Panel>
