@@ -121,5 +121,13 @@ export function layoutStitchRow(row: Row, profile: WidthProfile, outline: readon
       warnings.push({ code: 'stitch-pitch-off', pieceId, message: `stitch row ${field}: pitch ${row.pitchMm} mm had to become ${worst.toFixed(2)} mm (${offPct.toFixed(1)} %, tolerance ${row.tolerancePct} %)` });
     rows.push({ points, holes, pitchMm: row.pitchMm, adjustedPitchMm: worst, seamLengthMm: seam, threadMm: THREAD_PER_SEAM * seam });
   }
+  // Both edges run into one point (the tip of a spear or English point, a round end's apex, or
+  // the same at the start): the hole there is shared, so the bottom row does not punch it again.
+  if (rows.length === 2) {
+    const [t, b] = rows as [StitchRowLayout, StitchRowLayout];
+    const same = (p: Pt | undefined, q: Pt | undefined) => !!p && !!q && Math.hypot(p.x - q.x, p.y - q.y) < 1e-6;
+    if (same(t.holes[t.holes.length - 1], b.holes[b.holes.length - 1])) b.holes.pop();
+    if (same(t.holes[0], b.holes[0])) b.holes.shift();
+  }
   return { rows, warnings };
 }

@@ -106,3 +106,14 @@ describe('stitch rows against svg-path-properties', () => {
     });
   }
 });
+
+describe('stitch rows along both edges into a point', () => {
+  it('when both edges run to the tip of a spear, then the tip hole is punched once and both rows end on it', () => {
+    const d = 30, o = 3;
+    const rows = rowsOf(strap({ kind: 'spear', depthMm: d }, { path: 'both-edges', offsetMm: o }));
+    const tip = { x: L - o / Math.sin(Math.atan2(H, d)), y: 0 }; // the inset V's apex (line geometry)
+    const at = rows.flatMap((r) => r.holes).filter((h) => Math.hypot(h.x - tip.x, h.y - tip.y) < 1e-6);
+    expect(at).toHaveLength(1);
+    for (const r of rows) expect(r.points.some((p) => Math.hypot(p.x - tip.x, p.y - tip.y) < 1e-6)).toBe(true);
+  });
+});
