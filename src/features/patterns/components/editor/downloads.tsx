@@ -89,7 +89,7 @@ export function Downloads({ base, kind, revisionNumber, unit, sizes, dirty }: Do
   const pdfQuery = toQuery(optionsBody({ ...choice, size }, unit, sizes.length > 0));
   const sizeQuery = sizes.length > 0 && size !== 'all' ? `?size=${encodeURIComponent(size)}` : '';
   return (
-    <div className="grid gap-3">
+    <div className="grid gap-3" data-testid="print-panel">
       <PrintOptions value={{ ...choice, size }} onChange={setChoice} unit={unit} sizes={sizes} errors={fields} disabled={busy} />
       <div className="flex flex-wrap gap-2">
         {/* A link, so it still downloads without script; with script it fetches, to show refusals beside the options. */}

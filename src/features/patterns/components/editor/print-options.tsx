@@ -43,7 +43,7 @@ export function PrintOptions({ value, onChange, unit, sizes, errors, disabled }:
   const set = <K extends keyof PrintChoice>(key: K, v: PrintChoice[K]) => onChange({ ...value, [key]: v });
   return (
     <div className="grid grid-cols-2 gap-x-3 gap-y-3">
-      <SelectField label="Paper" value={value.paper} error={errors.paper} disabled={disabled} onChange={(e) => set('paper', e.target.value)}>
+      <SelectField label="Paper" value={value.paper} error={errors.paper} disabled={disabled} onChange={(e) => set('paper', e.target.value)} wrapperClassName="col-span-2">
         {PAPERS.map((p) => (
           <option key={p.value} value={p.value}>
             {p.label}
@@ -57,6 +57,16 @@ export function PrintOptions({ value, onChange, unit, sizes, errors, disabled }:
           </option>
         ))}
       </SelectField>
+      {sizes.length > 0 && (
+        <SelectField label="Size" value={value.size} error={errors.size} disabled={disabled} onChange={(e) => set('size', e.target.value)}>
+          <option value="all">All {sizes.length} sizes</option>
+          {sizes.map((s) => (
+            <option key={s} value={s}>
+              {s}
+            </option>
+          ))}
+        </SelectField>
+      )}
       <TextField
         label="Margin"
         unit={unit}
@@ -81,16 +91,6 @@ export function PrintOptions({ value, onChange, unit, sizes, errors, disabled }:
         disabled={disabled}
         onChange={(e) => set('overlap', e.target.value)}
       />
-      {sizes.length > 0 && (
-        <SelectField label="Size" value={value.size} error={errors.size} disabled={disabled} onChange={(e) => set('size', e.target.value)} wrapperClassName="col-span-2">
-          <option value="all">All {sizes.length} sizes</option>
-          {sizes.map((s) => (
-            <option key={s} value={s}>
-              {s}
-            </option>
-          ))}
-        </SelectField>
-      )}
       <div className="col-span-2">
         <CheckboxField
           label="Add the job sheet"
