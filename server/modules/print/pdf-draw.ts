@@ -4,11 +4,13 @@ import { PLEX_CAP_PER_EM, textMm } from './pdf-text.ts';
 import { mmToPt } from './units.ts';
 
 /** Stroke per layer, mm. Renderers style by layer, never by item (drawing.ts). */
-export const LAYER_STROKE: Record<Exclude<LayerName, 'label'>, { widthMm: number; color: string; dashMm?: [number, number] }> = {
+export const LAYER_STROKE: Record<LayerName, { widthMm: number; color: string; dashMm?: [number, number] }> = {
   guide: { widthMm: 0.18, color: '#6b6b6b', dashMm: [1.2, 0.9] },
   fold: { widthMm: 0.25, color: '#000000', dashMm: [3, 1.5] },
   cut: { widthMm: 0.35, color: '#000000' },
   punch: { widthMm: 0.25, color: '#000000' },
+  // Dimension lines, ticks and group brackets: thin, so they never read as a cut.
+  label: { widthMm: 0.12, color: '#333333' },
 };
 
 /** Bézier constant for a quarter circle: 4/3 (sqrt 2 - 1). */
@@ -35,7 +37,7 @@ export function circlePt(doc: PDFKit.PDFDocument, cx: number, cy: number, r: num
   doc.closePath();
 }
 
-function strokeLayer(doc: PDFKit.PDFDocument, layer: Exclude<LayerName, 'label'>, dashed: boolean): void {
+function strokeLayer(doc: PDFKit.PDFDocument, layer: LayerName, dashed: boolean): void {
   const s = LAYER_STROKE[layer];
   doc.lineWidth(mmToPt(s.widthMm)).strokeColor(s.color).lineJoin('round').lineCap('butt');
   if (dashed && s.dashMm) doc.dash(mmToPt(s.dashMm[0]), { space: mmToPt(s.dashMm[1]) });
@@ -55,7 +57,6 @@ function drawItem(doc: PDFKit.PDFDocument, item: DrawingItem, ox: number, oy: nu
     });
     return;
   }
-  if (item.layer === 'label') return; // only text belongs on the label layer
   if (item.type === 'circle') {
     const [cx, cy] = map(item.cx, item.cy);
     circlePt(doc, cx, cy, mmToPt(item.r));
