@@ -49,14 +49,28 @@ export function EndShapeFields({ control, unit, disabled, setValue, index, end, 
   const width = useWatch({ control, name: 'widthMm' });
   const kind = shape?.kind ?? 'square';
   const parameter = PARAMETER[kind];
+  const widthOf = () => (pieceWidth !== undefined && Number.isFinite(pieceWidth) ? pieceWidth : width);
   const onChanged = (next: string) => {
-    const w = Number.isFinite(pieceWidth) && pieceWidth ? pieceWidth : width;
-    setValue(`pieces.${index}.${end}.shape`, reshapeEnd(shape, next as EndShape['kind'], w), { shouldDirty: true, shouldValidate: true });
+    setValue(`pieces.${index}.${end}.shape`, reshapeEnd(shape, next as EndShape['kind'], widthOf()), { shouldDirty: true, shouldValidate: true });
   };
   return (
     <>
       <SelectInput control={control} name={`pieces.${index}.${end}.shape.kind`} label={`${what} shape`} options={SHAPES} disabled={disabled} onChanged={onChanged} />
-      {parameter ? (
+      {parameter && shape && !(parameter.key in shape) ? (
+        // A round end without a radius is a semicircle; binding the field would add the key
+        // and leave a just-opened pattern with changes.
+        <div className="flex flex-col gap-1 self-end pb-1 text-xs text-hide-600">
+          <span>Semicircle (half the width).</span>
+          <button
+            type="button"
+            className="self-start font-medium text-hide-800 underline underline-offset-2 disabled:no-underline"
+            disabled={disabled}
+            onClick={() => setValue(`pieces.${index}.${end}.shape`, reshapeEnd(shape, kind, widthOf()), { shouldDirty: true, shouldValidate: true })}
+          >
+            Set a corner radius
+          </button>
+        </div>
+      ) : parameter ? (
         <LengthField
           key={kind}
           control={control}
