@@ -1,22 +1,16 @@
 // Compares two revisions of a pattern: changed parameters and layout differences.
 import { computeLayout } from '@shared/pattern/compute-layout.ts';
 import { EngineError } from '@shared/pattern/engine-error.ts';
+import type { Comparison } from '@shared/schemas/library-views.ts';
 import type { StrapSpec } from '@shared/schemas/strap-spec.ts';
 import { badInput } from '../../http/http-error.ts';
 import type { AuthContext } from '../../http/session.ts';
 import type { LibraryDeps } from '../library-deps.ts';
 import { patternOr404 } from '../patterns/pattern-access.ts';
 import { layoutDiff, type LayoutDiff } from './layout-diff.ts';
-import { specChanges, type ParamChange } from './spec-diff.ts';
+import { specChanges } from './spec-diff.ts';
 
-export interface Comparison {
-  from: number;
-  to: number;
-  params: ParamChange[];
-  /** null when either revision no longer lays out (see layoutError). */
-  layout: LayoutDiff | null;
-  layoutError: string | null;
-}
+export type { Comparison };
 
 export async function compareRevisions(deps: LibraryDeps, auth: AuthContext, patternRaw: string | undefined, q: { from: number; to: number }): Promise<Comparison> {
   const p = await patternOr404(deps.repos.patterns, patternRaw, auth.shop.id);

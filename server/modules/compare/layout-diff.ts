@@ -2,40 +2,12 @@
 // Features are matched by kind and label (then by order among equals); positions are mm
 // from each piece's datum, so a move is a change of atMm or yMm.
 import type { Feature, PatternLayout, PieceLayout } from '@shared/pattern/layout-types.ts';
+import type { FeatureRef, LayoutDiff, MovedFeature, PieceDiff } from '@shared/schemas/library-views.ts';
 
 /** Smaller changes than this (mm) are rounding, not a move. */
 export const MOVE_TOLERANCE_MM = 0.005;
 
-export interface FeatureRef {
-  kind: Feature['kind'];
-  label: string;
-  atMm: number;
-  yMm: number;
-}
-export interface MovedFeature {
-  kind: Feature['kind'];
-  label: string;
-  from: { atMm: number; yMm: number };
-  to: { atMm: number; yMm: number };
-  /** to - from along the strap, mm (+ toward the tip). */
-  deltaAtMm: number;
-}
-export interface PieceDiff {
-  pieceId: string;
-  name: string;
-  status: 'changed' | 'added' | 'removed';
-  blankLengthMm: { from: number | null; to: number | null; deltaMm: number | null };
-  moved: MovedFeature[];
-  added: FeatureRef[];
-  removed: FeatureRef[];
-}
-export interface LayoutDiff {
-  unit: 'mm';
-  targetMm: { from: number; to: number };
-  fitRangeMm: { from: [number, number] | null; to: [number, number] | null };
-  pieces: PieceDiff[];
-  warnings: { added: string[]; removed: string[] };
-}
+export type { FeatureRef, LayoutDiff, MovedFeature, PieceDiff };
 
 const ref = (f: Feature): FeatureRef => ({ kind: f.kind, label: f.label, atMm: f.atMm, yMm: f.yMm });
 

@@ -1,13 +1,8 @@
 // Which spec parameters differ between two revisions, each with both values and its unit.
 
-/** One changed parameter. `path` is dotted ("pieces.0.end.holes.count"); a value is undefined where absent. */
-export interface ParamChange {
-  path: string;
-  from: unknown;
-  to: unknown;
-  /** "mm", "oz", "%" or null for counts, flags and names. */
-  unit: string | null;
-}
+import type { ParamChange } from '@shared/schemas/library-views.ts';
+
+export type { ParamChange };
 
 type Leaves = Map<string, unknown>;
 

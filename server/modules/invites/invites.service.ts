@@ -1,5 +1,6 @@
 // Invites by e-mail: send, list, revoke, look at, accept (signs up or joins).
 import type { Role } from '@shared/schemas/auth.ts';
+import type { InviteLookup, InviteView } from '@shared/schemas/library-views.ts';
 import { writeTransaction } from '../../db/write-transaction.ts';
 import { HttpError, badInput, notFound } from '../../http/http-error.ts';
 import type { AuthContext } from '../../http/session.ts';
@@ -13,7 +14,7 @@ import { iso } from '../patterns/views.ts';
 import type { InviteRow, InvitesRepository } from './invites.repository.ts';
 import { newToken, plausibleToken, tokenHash } from './tokens.ts';
 
-const inviteView = (i: InviteRow) => ({
+const inviteView = (i: InviteRow): InviteView => ({
   id: i.id,
   email: i.email,
   role: i.role,
@@ -68,7 +69,7 @@ export function createInvitesService(deps: LibraryDeps, invites: InvitesReposito
     },
 
     /** What the invite page shows before accepting. */
-    async view(token: string | undefined) {
+    async view(token: string | undefined): Promise<InviteLookup> {
       const row = await usable(token);
       const account = await repos.auth.findUserByEmail(row.email);
       return { invite: inviteView(row), accountExists: account !== undefined };

@@ -1,5 +1,6 @@
 // The library: list, create, read, rename/tag/archive, duplicate, follow, activity.
 import type { ListPatternsQuery, PatternPage, PatternView, PatternWithHead } from '@shared/schemas/library.ts';
+import type { ActivityItem } from '@shared/schemas/library-views.ts';
 import type { StrapSpec } from '@shared/schemas/strap-spec.ts';
 import { writeTransaction } from '../../db/write-transaction.ts';
 import { badInput } from '../../http/http-error.ts';
@@ -114,7 +115,7 @@ export function createPatternsService(deps: LibraryDeps) {
       return { following: on };
     },
 
-    async activity(auth: AuthContext, raw: string | undefined) {
+    async activity(auth: AuthContext, raw: string | undefined): Promise<{ items: ActivityItem[] }> {
       const p = await patternOr404(repos.patterns, raw, auth.shop.id);
       const rows = await repos.audit.forPattern(p.id, 200);
       return {

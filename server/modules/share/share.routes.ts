@@ -4,6 +4,7 @@ import { computeLayout } from '@shared/pattern/compute-layout.ts';
 import { drawLayout } from '@shared/pattern/draw-layout.ts';
 import { CreateShareSchema } from '@shared/schemas/library.ts';
 import type { Action } from '@shared/schemas/permissions.ts';
+import type { SharedPattern } from '@shared/schemas/library-views.ts';
 import type { StrapSpec } from '@shared/schemas/strap-spec.ts';
 import { param, route } from '../../http/allow.ts';
 import { authOf } from '../../http/require-role.ts';
@@ -35,14 +36,15 @@ export function shareRoutes(shares: ShareService): Router {
     const layout = computeLayout(spec);
     const date = iso(revision.created_at);
     const base = `/api/s/${token}`;
-    res.json({
+    const view: SharedPattern = {
       shopName: share.shop_name,
       pattern: { name: share.pattern_name, kind: share.pattern_kind },
       revision: { number: revision.number, spec, engineVersion: revision.engine_version, createdAt: date },
       layout,
       drawing: drawLayout(layout, spec, { revision: `rev ${revision.number}`, date: date.slice(0, 10) }),
       downloads: { pdf: `${base}/pdf`, svg: `${base}/svg`, cutterSvg: `${base}/cutter.svg` },
-    });
+    };
+    res.json(view);
   });
   const formats: Array<[Action, ExportFormat]> = [
     ['share.pdf', 'pdf'],

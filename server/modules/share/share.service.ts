@@ -1,5 +1,6 @@
 // Share links: members with edit rights create and revoke them; anyone with the token sees
 // one revision read-only, and nothing else of the shop.
+import type { CreatedShare, ShareView } from '@shared/schemas/library-views.ts';
 import { writeTransaction } from '../../db/write-transaction.ts';
 import { badInput, notFound } from '../../http/http-error.ts';
 import type { AuthContext } from '../../http/session.ts';
@@ -10,14 +11,14 @@ import { iso } from '../patterns/views.ts';
 import type { RevisionRow } from '../revisions/revisions.repository.ts';
 import type { ResolvedShare, ShareRepository, ShareRow } from './share.repository.ts';
 
-const shareView = (s: ShareRow) => ({ id: s.id, revision: s.revision_number, createdAt: iso(s.created_at), createdBy: s.creator_name });
+const shareView = (s: ShareRow): ShareView => ({ id: s.id, revision: s.revision_number, createdAt: iso(s.created_at), createdBy: s.creator_name });
 
 export function createShareService(deps: LibraryDeps, shares: ShareRepository) {
   const { db, repos, config } = deps;
   const urlOf = (token: string) => `${config.publicOrigin}/s/${token}`;
 
   return {
-    async create(auth: AuthContext, patternRaw: string | undefined, input: { revision?: number | null }) {
+    async create(auth: AuthContext, patternRaw: string | undefined, input: { revision?: number | null }): Promise<{ share: CreatedShare }> {
       const p = await patternOr404(repos.patterns, patternRaw, auth.shop.id);
       const revision = input.revision ?? null;
       if (revision !== null && (revision < 1 || revision > p.head_number)) throw badInput({ revision: `revision must be between 1 and ${p.head_number}, or left out for the head` });

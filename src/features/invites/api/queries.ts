@@ -1,13 +1,7 @@
 import { queryOptions, useMutation } from '@tanstack/react-query';
-import type { MeResponse, Role } from '@shared/schemas/auth.ts';
+import type { MeResponse } from '@shared/schemas/auth.ts';
 import { api } from '@/lib/api-client.ts';
-
-/** What an invite link shows before it is accepted. */
-export interface InviteLookup {
-  invite: { id: number; email: string; role: Role; shopName: string; invitedBy: string | null; expiresAt: string; expired: boolean };
-  /** Whether an account with the invited e-mail exists (then only its password is asked). */
-  accountExists: boolean;
-}
+import type { InviteLookup } from '@shared/schemas/library-views.ts';
 
 export const inviteKeys = {
   all: ['invites'] as const,

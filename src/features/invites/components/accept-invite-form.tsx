@@ -7,7 +7,8 @@ import { applyServerErrors } from '@/lib/form-errors.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useAcceptInvite, type InviteLookup } from '../api/queries.ts';
+import type { InviteLookup } from '@shared/schemas/library-views.ts';
+import { useAcceptInvite } from '../api/queries.ts';
 
 export interface AcceptInviteFormProps {
   token: string;

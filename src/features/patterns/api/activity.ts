@@ -1,15 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { api } from '@/lib/api-client.ts';
 import { patternKeys } from './queries.ts';
-
-/** One row of the pattern's audit trail (who did what, when). */
-export interface ActivityItem {
-  id: number;
-  action: string;
-  detail: Record<string, unknown>;
-  at: string;
-  by: { id: number; name: string } | null;
-}
+import type { ActivityItem } from '@shared/schemas/library-views.ts';
 
 export const activityQueryOptions = (id: number) =>
   queryOptions({

@@ -1,20 +1,7 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client.ts';
 import { patternKeys } from './queries.ts';
-
-/** A share link as listed; `revision` null means "whatever the head is when opened". */
-export interface ShareView {
-  id: number;
-  revision: number | null;
-  createdAt: string;
-  createdBy: string | null;
-}
-
-/** Only the creating answer carries the token and URL: the server keeps just a hash. */
-export interface CreatedShare extends ShareView {
-  token: string;
-  url: string;
-}
+import type { CreatedShare, ShareView } from '@shared/schemas/library-views.ts';
 
 export const sharesQueryOptions = (patternId: number) =>
   queryOptions({

@@ -1,18 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { Drawing } from '@shared/render/drawing.ts';
-import type { PatternLayout } from '@shared/pattern/layout-types.ts';
-import type { StrapSpec } from '@shared/schemas/strap-spec.ts';
 import { api } from '@/lib/api-client.ts';
-
-/** `GET /api/s/:token`: one revision, read-only, with nothing else of the shop. */
-export interface SharedPattern {
-  shopName: string;
-  pattern: { name: string; kind: string };
-  revision: { number: number; spec: StrapSpec; engineVersion: string; createdAt: string };
-  layout: PatternLayout;
-  drawing: Drawing;
-  downloads: { pdf: string; svg: string; cutterSvg: string };
-}
+import type { SharedPattern } from '@shared/schemas/library-views.ts';
 
 export const shareKeys = {
   all: ['share'] as const,

@@ -1,7 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { Role } from '@shared/schemas/auth.ts';
 import { api } from '@/lib/api-client.ts';
-import { shopKeys, type InviteView } from './queries.ts';
+import type { InviteView } from '@shared/schemas/library-views.ts';
+import { shopKeys } from './queries.ts';
 
 export function useChangeRole() {
   const queryClient = useQueryClient();

@@ -1,19 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
-import type { Role } from '@shared/schemas/auth.ts';
 import type { MemberView } from '@shared/schemas/library.ts';
 import { api } from '@/lib/api-client.ts';
-
-/** An open invite as `GET /api/shop/invites` lists it. */
-export interface InviteView {
-  id: number;
-  email: string;
-  role: Role;
-  shopName: string;
-  invitedBy: string | null;
-  expiresAt: string;
-  createdAt: string;
-  expired: boolean;
-}
+import type { InviteView } from '@shared/schemas/library-views.ts';
 
 /** Keys of the shop's people, generic to specific. */
 export const shopKeys = {

@@ -1,4 +1,4 @@
-import type { InviteView } from '../api/queries.ts';
+import type { InviteView } from '@shared/schemas/library-views.ts';
 import { useRevokeInvite } from '../api/mutations.ts';
 import { Badge } from '@/components/ui/badge.tsx';
 import { Button } from '@/components/ui/button.tsx';

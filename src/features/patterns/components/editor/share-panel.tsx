@@ -3,7 +3,8 @@ import { useQuery } from '@tanstack/react-query';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { formatWhen } from '@/lib/format-when.ts';
-import { sharesQueryOptions, useCreateShare, useRevokeShare, type CreatedShare } from '../../api/shares.ts';
+import type { CreatedShare } from '@shared/schemas/library-views.ts';
+import { sharesQueryOptions, useCreateShare, useRevokeShare } from '../../api/shares.ts';
 
 /**
  * Read-only links for people outside the shop (a customer, a supplier). A link shows one

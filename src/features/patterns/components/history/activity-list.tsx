@@ -1,5 +1,5 @@
 import { formatWhen } from '@/lib/format-when.ts';
-import type { ActivityItem } from '../../api/activity.ts';
+import type { ActivityItem } from '@shared/schemas/library-views.ts';
 
 const num = (v: unknown) => (typeof v === 'number' ? v : undefined);
 

@@ -2,7 +2,7 @@ import { formatLength } from '@shared/units/format-length.ts';
 import type { LengthUnit } from '@shared/units/length.ts';
 import { Notice } from '@/components/ui/notice.tsx';
 import { Panel } from '@/components/ui/panel.tsx';
-import type { Comparison, ParamChange } from '../../api/compare.ts';
+import type { Comparison, ParamChange } from '@shared/schemas/library-views.ts';
 
 function value(v: unknown, unit: string | null, display: LengthUnit): string {
   if (typeof v === 'number' && unit === 'mm') return formatLength(v, display);
