@@ -168,4 +168,18 @@ describe('a size run in the browser', () => {
     expect(download.suggestedFilename()).toMatch(/-r2-size-m-letter\.pdf$/);
     await expect(page.getByTestId('print-progress').count()).resolves.toBe(0);
   }, 90_000);
+
+  it('when a size is removed and two names clash, then the run shrinks and the schema names the clash under the sizes', async () => {
+    await page.getByRole('button', { name: 'Remove size XL' }).click();
+    await expect.poll(() => page.getByTestId('size-row').count()).toBe(4);
+    await expect.poll(() => page.getByTestId('size-run-row').count()).toBe(4);
+    // Size names are unique whatever their case (shared/schemas/strap-spec.ts).
+    await page.getByLabel('Size 4 name').fill('s');
+    const sizes = page.getByRole('group', { name: 'Sizes' });
+    await sizes.getByRole('alert').getByText('size names must be unique').waitFor();
+    await expect(page.getByRole('button', { name: /Save revision/ }).isDisabled()).resolves.toBe(true);
+    await snap(page, 'size-run-06-names-clash');
+    await page.getByLabel('Size 4 name').fill('L');
+    await expect.poll(() => sizes.getByText('size names must be unique').count()).toBe(0);
+  });
 });

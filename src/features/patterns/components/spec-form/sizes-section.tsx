@@ -1,5 +1,6 @@
-import { useController, useFieldArray, useFormState, useWatch } from 'react-hook-form';
-import { SIZES_MAX, SIZE_NAME_MAX_CHARS } from '@shared/schemas/strap-spec.ts';
+import { useMemo } from 'react';
+import { useController, useFieldArray, useWatch } from 'react-hook-form';
+import { SIZES_MAX, SIZE_NAME_MAX_CHARS, StrapSpecSchema } from '@shared/schemas/strap-spec.ts';
 import { LengthField } from '@/components/form/length-field.tsx';
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
@@ -35,9 +36,12 @@ export function SizesSection({ control, unit, disabled }: SectionProps) {
   const { fields, append, remove } = useFieldArray({ control, name: 'sizes' });
   const sizes = useWatch({ control, name: 'sizes' }) ?? [];
   const girth = useWatch({ control, name: 'girthMm' });
-  // The run's own refusals (unique names, at most 12) sit on the array, not on a row.
-  const { errors } = useFormState({ control, name: 'sizes' });
-  const rootError = errors.sizes?.root?.message ?? errors.sizes?.message;
+  // The run's own refusals (unique names, at most 12) belong to no row: ask the shared schema
+  // for the array's issues directly, since the resolver files them under no input.
+  const rootError = useMemo(() => {
+    const r = StrapSpecSchema.shape.sizes.safeParse(sizes);
+    return r.success ? undefined : r.error.issues.find((i) => i.path.length === 0)?.message;
+  }, [sizes]);
 
   const addSize = () => {
     const last = sizes[sizes.length - 1];
