@@ -4,11 +4,11 @@ import type { LengthUnit } from '@shared/units/length.ts';
 import { Cautions } from '@/components/pattern/cautions.tsx';
 import { buttonClass } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { textToLengthMm } from '@/components/form/length-text.ts';
 import { isApiError, type FieldErrors } from '@/lib/api-client.ts';
-import { useDownload, usePrintJob, type PrintOptionsBody } from '../../api/print-jobs.ts';
+import { useDownload, usePrintJob } from '../../api/print-jobs.ts';
 import { PrintOptions, type PrintChoice } from './print-options.tsx';
 import { PrintProgress } from './print-progress.tsx';
+import { optionsBody, toQuery } from './print-query.ts';
 
 /** A run this long renders on the server's print worker, with progress, instead of in the request. */
 export const JOB_MIN_SIZES = 3;
@@ -25,28 +25,6 @@ export interface DownloadsProps {
   dirty?: boolean;
 }
 
-// A length as typed becomes mm with its unit ("6mm"); what is not a length goes as typed, so
-// the server names it beside the option.
-function lengthOption(text: string, unit: LengthUnit): string | undefined {
-  if (text.trim() === '') return undefined;
-  const mm = textToLengthMm(text, unit);
-  return Number.isFinite(mm) ? `${Math.round(mm * 1000) / 1000}mm` : text.trim();
-}
-
-function optionsBody(c: PrintChoice, unit: LengthUnit, hasSizes: boolean): PrintOptionsBody {
-  const margin = lengthOption(c.margin, unit);
-  const overlap = lengthOption(c.overlap, unit);
-  return {
-    paper: c.paper,
-    orientation: c.orientation,
-    ...(margin !== undefined ? { margin } : {}),
-    ...(overlap !== undefined ? { overlap } : {}),
-    jobSheet: c.jobSheet,
-    ...(hasSizes && c.size ? { size: c.size } : {}),
-  };
-}
-
-const toQuery = (body: PrintOptionsBody) => new URLSearchParams(Object.entries(body).map(([k, v]) => [k, String(v)])).toString();
 
 /**
  * Print and download a saved revision: the print options, the template PDF (a run of three or

@@ -2,6 +2,7 @@ import { useWatch, type FieldPath } from 'react-hook-form';
 import type { EndShape, StrapSpecInput } from '@shared/schemas/strap-spec.ts';
 import { LengthField } from '@/components/form/length-field.tsx';
 import { SelectInput } from '@/components/form/select-input.tsx';
+import { reshapeEnd } from './reshape-end.ts';
 import type { SectionProps, SpecSetValue } from './types.ts';
 
 const SHAPES = [
@@ -20,27 +21,6 @@ const PARAMETER: Record<EndShape['kind'], { key: 'radiusMm' | 'chamferMm' | 'dep
   'english-point': { key: 'depthMm', label: 'Point depth', hint: 'At least half the width.' },
   spear: { key: 'depthMm', label: 'Point depth' },
 };
-
-/**
- * A new shape keeps what carries over (a point depth between English point and spear) and
- * otherwise starts from a value the engine draws for this width.
- */
-export function reshapeEnd(current: EndShape | undefined, next: EndShape['kind'], widthMm: number): EndShape {
-  const half = Math.round((widthMm / 2) * 1000) / 1000;
-  const depth = current && 'depthMm' in current ? Math.max(current.depthMm, half) : Math.round(widthMm * 0.75 * 1000) / 1000;
-  switch (next) {
-    case 'square':
-      return { kind: 'square' };
-    case 'round':
-      return { kind: 'round', radiusMm: half };
-    case 'clipped':
-      return { kind: 'clipped', chamferMm: Math.round((widthMm / 4) * 1000) / 1000 };
-    case 'english-point':
-      return { kind: 'english-point', depthMm: depth };
-    case 'spear':
-      return { kind: 'spear', depthMm: depth };
-  }
-}
 
 /** Shape select and its parameter for one end of the strap piece (`end` is "start" or "end"). */
 export function EndShapeFields({ control, unit, disabled, setValue, index, end, what }: SectionProps & { setValue: SpecSetValue; index: number; end: 'start' | 'end'; what: string }) {
