@@ -182,4 +182,21 @@ describe('a size run in the browser', () => {
     await page.getByLabel('Size 4 name').fill('L');
     await expect.poll(() => sizes.getByText('size names must be unique').count()).toBe(0);
   });
+
+  it('when a size is too small for the five tip holes and the maker saves, then the run panel and the refused save name that size beside its girth', async () => {
+    // 2 in of collar leaves no room for 5 holes 3/4 in apart plus the tip (collar preset, common practice).
+    const girth = page.getByLabel('Size 4 girth (in)');
+    await girth.fill('2');
+    await page.getByText('tip holes run past the buckle end').first().waitFor();
+    await page.getByLabel('Note for this revision').fill('Trying a toy size.');
+    await page.getByRole('button', { name: 'Save revision 3' }).click();
+    await expect.poll(() => girth.getAttribute('aria-invalid')).toBe('true');
+    const describedBy = (await girth.getAttribute('aria-describedby')) ?? '';
+    const message = (await page.locator(`[id="${describedBy}"]`).textContent()) ?? '';
+    // The server names the size and the engine's limit; the field path stays out of the sentence.
+    expect(message).toMatch(/^size L: tip holes run past the buckle end/);
+    await snap(page, 'size-run-07-size-refused');
+    await girth.fill('16');
+    await expect.poll(() => girth.getAttribute('aria-invalid')).toBeNull();
+  });
 });

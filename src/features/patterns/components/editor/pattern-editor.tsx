@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { useForm, useWatch } from 'react-hook-form';
+import { useForm, useWatch, type FieldPath } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { StrapSpecSchema, type StrapSpec, type StrapSpecInput } from '@shared/schemas/strap-spec.ts';
 import { presetSpec } from '@shared/pattern/presets/index.ts';
@@ -62,6 +62,14 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
         const latest = await fetchLatest();
         setConflict({ number: latest.head.number, author: latest.head.author?.name ?? null, note: latest.head.note, detail: latest });
       } else {
+        // A refused spec value (e.g. `spec.sizes.2.girthMm`, a size the engine cannot draw) goes beside its field too.
+        if (isApiError(err, 400)) {
+          for (const [field, message] of Object.entries(err.fields ?? {})) {
+            // Beside the field its path is noise: "spec.sizes.3.girthMm: size L: ..." reads "size L: ...".
+            const text = message.startsWith(`${field}: `) ? message.slice(field.length + 2) : message;
+            if (field.startsWith('spec.')) form.setError(field.slice('spec.'.length) as FieldPath<StrapSpecInput>, { type: 'server', message: text });
+          }
+        }
         setError(err instanceof Error ? err.message : 'The save did not go through.');
       }
       return false;
