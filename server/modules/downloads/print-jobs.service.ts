@@ -5,26 +5,14 @@ import { badInput, HttpError } from '../../http/http-error.ts';
 import { downloadFileName, EXPORT_FORMATS, parsePrintOptions, printErrorToHttp, runPrintJob, specsForSize, type ExportFormat, type PrintedFile } from '../print/index.ts';
 import type { RevisionRow } from '../revisions/revisions.repository.ts';
 import { createPrintJobTable, DEFAULT_PRINT_JOB_LIMITS, QueueFullError, type JobError, type JobOwner, type JobRecord, type PrintJobLimits } from './print-job-table.ts';
+import type { PrintJobView } from '@shared/schemas/library-views.ts';
 
 /** The body keys a job accepts: the pdf query's options plus the format. */
 const OPTION_KEYS = ['format', 'paper', 'width', 'length', 'orientation', 'margin', 'overlap', 'size', 'jobSheet'] as const;
 
 /** A job as the API answers it (`progress` is 0..1 over both stages, for a progress bar). */
-export interface PrintJobView {
-  id: string;
-  state: JobRecord['state'];
-  stage: JobRecord['stage'];
-  done: number;
-  total: number;
-  progress: number;
-  format: ExportFormat;
-  fileName: string;
-  createdAt: string;
-  expiresAt: string;
-  url: string;
-  fileUrl: string;
-  error?: JobError;
-}
+// The answer's shape is shared with the client (one definition).
+export type { PrintJobView };
 
 // Laying out is quick next to drawing pages, so the bar gives it the first tenth.
 const LAYOUT_SHARE = 0.1;
