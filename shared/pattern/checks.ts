@@ -69,6 +69,9 @@ export function pieceWarnings(spec: StrapSpec, piece: PieceLayout, profile: Widt
   return out;
 }
 
+/** How much tighter than the measure a collar may close at its nominal hole before a warning, mm. */
+export const COLLAR_TIGHT_SLACK_MM = 3;
+
 /** Pattern-level warnings: tail, fit range, D-rings, strip length, tip through the buckle. */
 export function patternWarnings(spec: StrapSpec, strap: PieceLayout, fit: FitReport, strapProfile: WidthProfile, t: number, keeperWidthMm: number): Warning[] {
   const u = spec.units;
@@ -90,6 +93,15 @@ export function patternWarnings(spec: StrapSpec, strap: PieceLayout, fit: FitRep
   const tol = spec.pieces.some((p) => p.end.kind === 'adjustable') ? 1e-6 : 3;
   if (fit.targetMm < lo - tol || fit.targetMm > hi + tol)
     add('fit-misses-target', `target ${formatLength(fit.targetMm, u)} lies outside the fit range ${formatLength(lo, u)} to ${formatLength(hi, u)} (${spec.mode} mode)`, strap.id);
+  // A collar must not close tighter than the neck was measured at the hole it is meant to be
+  // worn on: the maker checks with two fingers under it (common practice) before trusting it.
+  const nominalFit = fit.holes[fit.nominalIndex];
+  if (spec.kind === 'collar' && spec.closes && nominalFit && nominalFit.innerMm < fit.targetMm - COLLAR_TIGHT_SLACK_MM)
+    add(
+      'collar-tight-at-nominal',
+      `at the nominal hole the collar is ${formatLength(nominalFit.innerMm, u)} inside, ${formatLength(fit.targetMm - nominalFit.innerMm, u)} tighter than the ${formatLength(fit.targetMm, u)} measured: check that two fingers slip under it before relying on that hole, or use fit mode`,
+      strap.id,
+    );
   const dr = spec.hardware.dRings;
   if (dr.count > 0 && (strapProfile.startWidthMm > dr.insideWidthMm + HARDWARE_SLACK_MM.over || strapProfile.startWidthMm < dr.insideWidthMm - HARDWARE_SLACK_MM.under))
     add('width-hardware-mismatch', `width ${formatLength(strapProfile.startWidthMm, u)} does not match the D-rings' ${formatLength(dr.insideWidthMm, u)} inside width`, strap.id);

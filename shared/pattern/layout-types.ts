@@ -57,7 +57,8 @@ export type WarningCode =
   | 'fit-misses-target'
   | 'blank-longer-than-strip'
   | 'stitch-pitch-off'
-  | 'd-ring-no-room';
+  | 'd-ring-no-room'
+  | 'collar-tight-at-nominal';
 
 /** Fit at one adjustment hole. */
 export interface HoleFit {

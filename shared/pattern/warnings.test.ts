@@ -12,8 +12,8 @@ const flapOf = (s: StrapSpec) => {
 };
 
 describe('layout warnings', () => {
-  it('when the presets are laid out, then only the expected warnings appear (leash longer than a 60 in strip, rule-mode leash and bracelet off target)', () => {
-    const expected: Record<string, WarningCode[]> = { collar: [], belt: [], 'watch-strap': [], 'bag-strap': [], leash: ['fit-misses-target', 'blank-longer-than-strip'], bracelet: ['fit-misses-target'], keeper: [] };
+  it('when the presets are laid out, then only the expected warnings appear (rule-mode collar tighter than the neck at its middle hole, leash longer than a 60 in strip, rule-mode leash and bracelet off target)', () => {
+    const expected: Record<string, WarningCode[]> = { collar: ['collar-tight-at-nominal'], belt: [], 'watch-strap': [], 'bag-strap': [], leash: ['fit-misses-target', 'blank-longer-than-strip'], bracelet: ['fit-misses-target'], keeper: [] };
     for (const [name, want] of Object.entries(expected)) expect(codes(presetSpec(name as never)).sort(), name).toEqual([...want].sort());
   });
 
@@ -64,6 +64,15 @@ describe('layout warnings', () => {
     s.rule = { measure: 'blank', allowanceMm: 4 * IN };
     expect(codes(s)).toContain('fit-misses-target');
     expect(codes({ ...s, mode: 'fit' })).not.toContain('fit-misses-target');
+  });
+
+  it('when the rule-mode collar closes on its middle hole, then collar-tight-at-nominal says it closes 3/4 in under the 13 in neck (two-finger check, common practice)', () => {
+    // Blank = neck + 8 in (common practice); the middle hole sits 3 + 1 1/2 in from the tip and
+    // the bar at the fold 3 3/4 in from the buckle end: loop 12 3/4 in, inside 12 3/4 in - pi x 10 oz.
+    const w = computeLayout(collar()).warnings.find((x) => x.code === 'collar-tight-at-nominal');
+    expect(w?.message).toMatch(/12 1\/4 in inside, 3\/4 in tighter than the 13 in measured/);
+    expect(codes({ ...collar(), mode: 'fit' })).not.toContain('collar-tight-at-nominal');
+    expect(codes({ ...presetSpec('belt') })).not.toContain('collar-tight-at-nominal');
   });
 
   it('when a stitch row cannot keep its pitch within 0 % tolerance, then stitch-pitch-off gives the pitch it became', () => {
