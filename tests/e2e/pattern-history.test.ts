@@ -7,6 +7,7 @@ import { presetSpec } from '@shared/pattern/presets/index.ts';
 import { PRESET_NAMES } from '@shared/schemas/strap-spec.ts';
 import { startTestServer } from '../helpers/test-server.ts';
 import { ensureClientBuilt } from './support/build-client.ts';
+import { createPatternViaApi, signUpInBrowser } from './support/shop-session.ts';
 import { launchBrowser, type TestBrowser } from './support/browser.ts';
 import { snap } from './support/screenshots.ts';
 
@@ -26,20 +27,8 @@ describe('pattern history and sharing in the browser', () => {
     server = await startTestServer();
     browser = await launchBrowser();
     page = await browser.context.newPage();
-    await page.goto(server.url + '/sign-up');
-    await page.getByLabel('Your name').fill(maker.name);
-    await page.getByLabel('Shop name').fill(maker.shopName);
-    await page.getByLabel('E-mail').fill(maker.email);
-    await page.getByLabel('Password').fill(maker.password);
-    await page.getByRole('button', { name: 'Create shop and sign in' }).click();
-    await page.getByTestId('shop-name').waitFor();
-    // Setup through the real API with the session the browser holds.
-    const res = await page.request.post(server.url + '/api/patterns', {
-      headers: { Origin: server.url },
-      data: { name: 'Belt for Tobias Harrow', kind: 'belt', spec: presetSpec('belt'), note: 'Shop standard casual belt.' },
-    });
-    expect(res.status()).toBe(201);
-    id = ((await res.json()) as { pattern: { id: number } }).pattern.id;
+    await signUpInBrowser(page, server.url, maker);
+    id = await createPatternViaApi(page, server.url, { name: 'Belt for Tobias Harrow', kind: 'belt', spec: presetSpec('belt'), note: 'Shop standard casual belt.' });
   }, 180_000);
 
   afterAll(async () => {

@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { startTestServer } from '../helpers/test-server.ts';
 import { ensureClientBuilt } from './support/build-client.ts';
+import { signUpInBrowser } from './support/shop-session.ts';
 import { launchBrowser, type TestBrowser } from './support/browser.ts';
 import { snap, snapElement } from './support/screenshots.ts';
 
@@ -13,15 +14,7 @@ type Server = Awaited<ReturnType<typeof startTestServer>>;
 const apprentice = { name: 'Ilse Park', email: 'ilse@harrowfinch.example', password: 'first awl and a pricking iron' };
 const owner = { name: 'Maren Finch', shopName: 'Harrow & Finch Leatherworks', email: 'maren@harrowfinch.example', password: 'oak-tanned bridle 1892' };
 
-async function signUp(page: Page, base: string) {
-  await page.goto(base + '/sign-up');
-  await page.getByLabel('Your name').fill(owner.name);
-  await page.getByLabel('Shop name').fill(owner.shopName);
-  await page.getByLabel('E-mail').fill(owner.email);
-  await page.getByLabel('Password').fill(owner.password);
-  await page.getByRole('button', { name: 'Create shop and sign in' }).click();
-  await page.getByTestId('shop-name').waitFor();
-}
+const signUp = (page: Page, base: string) => signUpInBrowser(page, base, owner);
 
 /** The strap blank length the preview states, e.g. "21 in". */
 async function blankText(page: Page): Promise<string> {

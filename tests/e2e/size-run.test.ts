@@ -9,6 +9,7 @@ import { presetSpec } from '@shared/pattern/presets/index.ts';
 import { parseLengthMm } from '@shared/units/length.ts';
 import { startTestServer } from '../helpers/test-server.ts';
 import { ensureClientBuilt } from './support/build-client.ts';
+import { createPatternViaApi, signUpInBrowser } from './support/shop-session.ts';
 import { launchBrowser, type TestBrowser } from './support/browser.ts';
 import { snap, snapElement } from './support/screenshots.ts';
 
@@ -38,19 +39,8 @@ describe('a size run in the browser', () => {
     server = await startTestServer();
     browser = await launchBrowser();
     page = await browser.context.newPage();
-    await page.goto(server.url + '/sign-up');
-    await page.getByLabel('Your name').fill(maker.name);
-    await page.getByLabel('Shop name').fill(maker.shopName);
-    await page.getByLabel('E-mail').fill(maker.email);
-    await page.getByLabel('Password').fill(maker.password);
-    await page.getByRole('button', { name: 'Create shop and sign in' }).click();
-    await page.getByTestId('shop-name').waitFor();
-    const res = await page.request.post(server.url + '/api/patterns', {
-      headers: { Origin: server.url },
-      data: { name: 'Collar run for Bosun', kind: 'collar', spec: presetSpec('collar'), note: 'Shop collar, one size.' },
-    });
-    expect(res.status()).toBe(201);
-    id = ((await res.json()) as { pattern: { id: number } }).pattern.id;
+    await signUpInBrowser(page, server.url, maker);
+    id = await createPatternViaApi(page, server.url, { name: 'Collar run for Bosun', kind: 'collar', spec: presetSpec('collar'), note: 'Shop collar, one size.' });
   }, 180_000);
 
   afterAll(async () => {
@@ -69,7 +59,9 @@ describe('a size run in the browser', () => {
     }
     const rows = page.getByTestId('size-run-row');
     await expect.poll(() => rows.count()).toBe(5);
-    await expect.poll(() => rows.locator('th').allTextContents()).toEqual(RUN.map(([n]) => n));
+    // Each rule-mode collar closes under its neck at the middle hole, so every size carries the
+    // engine's collar-tight-at-nominal warning beside its name.
+    await expect.poll(() => rows.locator('th').allTextContents()).toEqual(RUN.map(([n]) => `${n}1 warning`));
     // Collar rule (common practice): blank = neck + 8 in.
     await expect(rows.locator('td:nth-of-type(2)').allTextContents()).resolves.toEqual(RUN.map(([, g]) => `${Number(g) + 8} in`));
     // Five holes 3/4 in apart span 3 in of fit (collar preset, common practice), so each range is 3 in wide.

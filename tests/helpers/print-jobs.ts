@@ -1,20 +1,10 @@
 // Print-job helpers for API tests: post a job, poll it until it settles, read a binary body.
 import request from 'supertest';
 import type { Express } from 'express';
+import type { PrintJobView } from '@shared/schemas/library-views.ts';
 
-/** The job shape the API answers (server/modules/downloads/print-jobs.service.ts). */
-export interface JobBody {
-  id: string;
-  state: 'queued' | 'running' | 'done' | 'failed';
-  stage: 'layout' | 'pages' | null;
-  done: number;
-  total: number;
-  progress: number;
-  fileName: string;
-  url: string;
-  fileUrl: string;
-  error?: { code: string; message: string; fields?: Record<string, string> };
-}
+/** The job shape the API answers: the one definition the server and client share. */
+export type JobBody = PrintJobView;
 
 /** A supertest request whose body is collected as a Buffer (PDFs, SVGs). */
 export const binary = (req: request.Test) =>
