@@ -36,7 +36,8 @@ describe('latchet layout | spec | svg', () => {
     const j = JSON.parse((await run('layout', '--preset', 'watch-strap')).stdout);
     expect(j.pieceId).toBe('long');
     expect(j.blankLengthMm).toBe(132);
-    expect(j.pieces.map((p: { id: string }) => p.id)).toEqual(['long', 'short']);
+    // The watch-strap preset: long and short piece plus the keeper cut for it.
+    expect(j.pieces.map((p: { id: string }) => p.id)).toEqual(['long', 'short', 'keeper']);
   }, 30_000);
 
   it('when --girth 14in --mode fit are given, then the nominal hole fits 14 in inside', async () => {
