@@ -1,6 +1,6 @@
 import type { PatternLayout } from '@shared/pattern/index.ts';
 import { formatLength } from '@shared/units/format-length.ts';
-import { cautionKind, cautionsFor } from './cautions.ts';
+import { cautionKind, cautionsFor } from '@shared/pattern/cautions.ts';
 import type { JobSheet } from './job-sheet.ts';
 
 /**

@@ -1,6 +1,6 @@
 import { LAYERS, type Drawing, type DrawingPiece } from '@shared/render/drawing.ts';
 import { drawCalibration, SQUARE_BLOCK_MM } from './calibration.ts';
-import { cautionKind, cautionLine } from './cautions.ts';
+import { cautionKind, cautionLine } from '@shared/pattern/cautions.ts';
 import { drawDatumRuler } from './datum-ruler.ts';
 import { fmtLength } from './format-length.ts';
 import { drawJobSheet, type JobSheet } from './job-sheet.ts';

@@ -1,6 +1,9 @@
-// The cautions the product shows: cutting and punching, dyes and solvents, pet collars,
-// sizes as starting points, straps that hold weight. Short forms fit the one line on every
-// template page; full forms go on the job sheet.
+/**
+ * The cautions the product shows: cutting and punching, dyes and solvents, pet collars,
+ * sizes as starting points, straps that hold weight. One list for every surface: the editor
+ * and the share page show the full forms, the job sheet prints them, and the short forms fit
+ * the one line on every template page.
+ */
 
 interface Caution {
   short: string;
@@ -36,6 +39,7 @@ const SIZES: Caution = {
 export type CautionKind = 'collar' | 'load' | 'other';
 
 function list(kind: CautionKind): Caution[] {
+  // Collars get the pet cautions; leashes and other straps that hold weight get the load one.
   return [CUT, PUNCH, DYE, ...(kind === 'collar' ? [PET] : []), ...(kind === 'load' ? [LOAD] : []), SIZES];
 }
 
@@ -50,7 +54,7 @@ export function cautionLine(kind: CautionKind): string {
   return `Caution: ${s}.`;
 }
 
-/** Guesses the kind from a pattern kind or name ("collar", "leash", "guitar strap", ...). */
+/** The caution group of a pattern kind or name ("collar", "leash", "bag-strap", "guitar strap", ...). */
 export function cautionKind(text: string): CautionKind {
   const t = text.toLowerCase();
   if (/collar/.test(t)) return 'collar';
