@@ -1,14 +1,17 @@
-import type { StrapSpec } from '../schemas/strap-spec.ts';
+import type { SizeSpec, StrapSpec } from '../schemas/strap-spec.ts';
 import { EngineError } from './engine-error.ts';
 import { computeLayout } from './compute-layout.ts';
 import type { Warning } from './layout-types.ts';
 import { roundLayoutNumbers } from './round-layout.ts';
+import { specAtGirth } from './spec-at-girth.ts';
 
 /** One graded size. */
 export interface SizeRow {
   name: string;
   girthMm: number;
   blankLengthMm: number;
+  /** Strap width of this size (graded or the pattern's), mm. */
+  widthMm: number;
   /** Inner lengths at the tightest and loosest hole, mm. */
   rangeMm: [number, number];
   nominalInnerMm: number;
@@ -30,20 +33,23 @@ export interface SizeRunReport {
 }
 
 /**
- * Grades one pattern into named sizes: the same spec at each girth (sorted by girth), each
- * size's fit range, and the gap or overlap between neighbouring ranges (mm).
+ * Grades one pattern into named sizes: the same spec at each girth (sorted by girth) with each
+ * size's graded width, holes and hardware (see specAtGirth), each size's fit range, and the gap
+ * or overlap between neighbouring ranges (mm). `sizes` defaults to the spec's own run.
  */
-export function gradeSizes(spec: StrapSpec, sizes: readonly { name: string; girthMm: number }[]): SizeRunReport {
+export function gradeSizes(spec: StrapSpec, sizes: readonly SizeSpec[] = spec.sizes): SizeRunReport {
   if (sizes.length === 0) throw new EngineError('sizes', 'a size run needs at least one size', 'at least 1 size');
   const rows: SizeRow[] = [...sizes]
     .sort((a, b) => a.girthMm - b.girthMm)
     .map((s) => {
-      const layout = computeLayout({ ...spec, girthMm: s.girthMm });
+      const one = specAtGirth({ ...spec, sizes: [s] }, { sizeName: s.name });
+      const layout = computeLayout(one);
       const fit = layout.fit!;
       return {
         name: s.name,
         girthMm: s.girthMm,
         blankLengthMm: layout.pieces.find((p) => p.role === 'strap')!.blankLengthMm,
+        widthMm: one.widthMm,
         rangeMm: fit.rangeMm,
         nominalInnerMm: fit.holes[fit.nominalIndex]!.innerMm,
         warnings: layout.warnings,

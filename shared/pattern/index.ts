@@ -4,6 +4,7 @@ export { presetSpec } from './presets/index.ts';
 export { parseSpec } from './parse-spec.ts';
 export { computeLayout } from './compute-layout.ts';
 export { drawLayout, type DrawOptions } from './draw-layout.ts';
+export { specAtGirth, findSize, type FitAt } from './spec-at-girth.ts';
 export { gradeSizes, type SizeRunReport, type SizeRow, type SizeJoin } from './grade-sizes.ts';
 export { EngineError } from './engine-error.ts';
 export { ENGINE_VERSION } from './engine-version.ts';

@@ -182,7 +182,10 @@ export const LengthRuleSchema = z.discriminatedUnion('measure', [
   z.object({ measure: z.literal('fixed'), blankMm: mm('rule blank length', 10, L.BLANK_MAX_MM) }),
 ]);
 
-/** One named size of a run: the same pattern at another girth. */
+/**
+ * One named size of a run: the same pattern at another girth. A size may grade the width,
+ * the tip holes and the hardware; what it leaves out comes from the pattern (see specAtGirth).
+ */
 export const SizeSchema = z.object({
   name: z
     .string()
@@ -190,6 +193,22 @@ export const SizeSchema = z.object({
     .min(1, { error: 'size name must not be empty' })
     .max(L.SIZE_NAME_MAX_CHARS, { error: `size name must be at most ${L.SIZE_NAME_MAX_CHARS} characters` }),
   girthMm: mm('size girth', L.GIRTH_MIN_MM, L.GIRTH_MAX_MM),
+  /** Strap width of this size; pieces and taper stations scale with it. */
+  widthMm: mm('size width', L.WIDTH_MIN_MM, L.WIDTH_MAX_MM).optional(),
+  /** Tip holes of this size (the strap piece's adjustable end). */
+  holes: z
+    .object({
+      count: count('size hole count', L.HOLE_COUNT_MIN, L.HOLE_COUNT_MAX).optional(),
+      spacingMm: mm('size hole spacing', L.HOLE_SPACING_MIN_MM, L.HOLE_SPACING_MAX_MM).optional(),
+    })
+    .optional(),
+  /** Hardware of this size; without it the buckle and D-rings follow the size's width. */
+  hardware: z
+    .object({
+      buckleInsideWidthMm: mm('size buckle inside width', L.WIDTH_MIN_MM, L.WIDTH_MAX_MM).optional(),
+      dRingInsideWidthMm: mm('size D-ring inside width', L.WIDTH_MIN_MM, L.WIDTH_MAX_MM).optional(),
+    })
+    .optional(),
 });
 /** One named size. */
 export type SizeSpec = z.infer<typeof SizeSchema>;
