@@ -17,7 +17,8 @@ export interface ReceivedMail extends ParsedMail {
 /** What the fake server received, newest last. */
 export interface Mailbox {
   messages(): ReceivedMail[];
-  /** Resolves with the first message matching `test`, waiting up to `timeoutMs`. */
+  /** Resolves with the first message matching `test`, waiting up to `timeoutMs` (a guard
+   * against hangs, generous so a loaded machine never trips it). */
   waitFor(test: (m: ReceivedMail) => boolean, timeoutMs?: number): Promise<ReceivedMail>;
 }
 
@@ -31,6 +32,7 @@ export interface FakeSmtp {
 export async function startFakeSmtp(options: { port?: number; folder?: string } = {}): Promise<FakeSmtp> {
   const stored: ReceivedMail[] = [];
   const waiters = new Set<() => void>();
+  let parsing: Promise<void> = Promise.resolve();
   if (options.folder) {
     mkdirSync(options.folder, { recursive: true });
     for (const f of readdirSync(options.folder).filter((n) => n.endsWith('.json')).sort()) {
@@ -46,16 +48,20 @@ export async function startFakeSmtp(options: { port?: number; folder?: string } 
       const chunks: Buffer[] = [];
       stream.on('data', (c: Buffer) => chunks.push(c));
       stream.on('end', () => {
-        const mail: ReceivedMail = {
-          id: (stored.at(-1)?.id ?? 0) + 1,
-          receivedAt: new Date().toISOString(),
-          recipients: session.envelope.rcptTo.map((r) => r.address),
-          ...parseMail(Buffer.concat(chunks).toString('utf8')),
-        };
-        stored.push(mail);
-        if (options.folder) writeFileSync(join(options.folder, `${String(mail.id).padStart(6, '0')}.json`), JSON.stringify(mail, null, 2));
-        for (const w of waiters) w();
-        callback();
+        const recipients = session.envelope.rcptTo.map((r) => r.address);
+        const receivedAt = new Date().toISOString();
+        // Parsing is asynchronous: chain it so messages keep their arrival order and ids.
+        const parsed = parsing.then(async () => {
+          const mail: ReceivedMail = { id: (stored.at(-1)?.id ?? 0) + 1, receivedAt, recipients, ...(await parseMail(Buffer.concat(chunks))) };
+          stored.push(mail);
+          if (options.folder) writeFileSync(join(options.folder, `${String(mail.id).padStart(6, '0')}.json`), JSON.stringify(mail, null, 2));
+          for (const w of waiters) w();
+        });
+        parsing = parsed.catch(() => undefined);
+        parsed.then(
+          () => callback(),
+          (err: Error) => callback(err),
+        );
       });
     },
   });
@@ -68,7 +74,7 @@ export async function startFakeSmtp(options: { port?: number; folder?: string } 
 
   const mailbox: Mailbox = {
     messages: () => [...stored],
-    waitFor(test, timeoutMs = 5000) {
+    waitFor(test, timeoutMs = 30_000) {
       return new Promise((resolve, reject) => {
         const check = () => {
           const found = stored.find(test);

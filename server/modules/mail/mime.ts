@@ -1,5 +1,7 @@
-// Just enough MIME reading for the fake mailbox: headers, multipart/alternative parts,
-// quoted-printable and base64 bodies (what nodemailer writes). Not a general parser.
+// Reading a received message for the fake mailbox, with mailparser (the nodemailer family's
+// parser): headers, encoded words, multipart bodies and transfer encodings are its job.
+import type { Readable } from 'node:stream';
+import { simpleParser, type AddressObject } from 'mailparser';
 
 export interface ParsedMail {
   subject: string;
@@ -9,74 +11,22 @@ export interface ParsedMail {
   html: string;
 }
 
-function splitHead(raw: string): { headers: Map<string, string>; body: string } {
-  const at = raw.search(/\r?\n\r?\n/);
-  const head = at < 0 ? raw : raw.slice(0, at);
-  const body = at < 0 ? '' : raw.slice(at).replace(/^\r?\n\r?\n/, '');
-  const headers = new Map<string, string>();
-  // Folded header lines continue with whitespace (RFC 5322, 2.2.3).
-  for (const line of head.replace(/\r?\n[ \t]+/g, ' ').split(/\r?\n/)) {
-    const colon = line.indexOf(':');
-    if (colon > 0) headers.set(line.slice(0, colon).trim().toLowerCase(), line.slice(colon + 1).trim());
-  }
-  return { headers, body };
-}
-
-function decodeQuotedPrintable(s: string): string {
-  const bytes: number[] = [];
-  const text = s.replace(/=\r?\n/g, '');
-  for (let i = 0; i < text.length; i += 1) {
-    const c = text[i]!;
-    if (c === '=' && /^[0-9A-F]{2}$/i.test(text.slice(i + 1, i + 3))) {
-      bytes.push(parseInt(text.slice(i + 1, i + 3), 16));
-      i += 2;
-    } else bytes.push(...Buffer.from(c, 'utf8'));
-  }
-  return Buffer.from(bytes).toString('utf8');
-}
-
-function decodeBody(body: string, encoding: string | undefined): string {
-  const enc = (encoding ?? '7bit').toLowerCase();
-  if (enc === 'base64') return Buffer.from(body.replace(/\s+/g, ''), 'base64').toString('utf8');
-  if (enc === 'quoted-printable') return decodeQuotedPrintable(body);
-  return body;
-}
-
-/** RFC 2047 encoded words such as =?UTF-8?Q?...?= in a header. */
-function decodeHeader(value: string): string {
-  // Whitespace between two encoded words is not part of the text (RFC 2047, 6.2).
-  return value.replace(/\?=\s+=\?/g, '?==?').replace(/=\?([^?]+)\?([BQbq])\?([^?]*)\?=/g, (_m, _charset: string, kind: string, data: string) =>
-    kind.toUpperCase() === 'B' ? Buffer.from(data, 'base64').toString('utf8') : decodeQuotedPrintable(data.replace(/_/g, ' ')),
-  );
-}
-
-function collect(raw: string, out: { text: string; html: string }): void {
-  const { headers, body } = splitHead(raw);
-  const type = headers.get('content-type') ?? 'text/plain';
-  const boundary = /boundary="?([^";]+)"?/i.exec(type)?.[1];
-  if (/^multipart\//i.test(type) && boundary) {
-    for (const part of body.split(`--${boundary}`).slice(1)) {
-      if (part.startsWith('--')) break;
-      collect(part.replace(/^\r?\n/, ''), out);
-    }
-    return;
-  }
-  const decoded = decodeBody(body, headers.get('content-transfer-encoding'));
-  if (/^text\/html/i.test(type)) out.html ||= decoded;
-  else if (/^text\/plain/i.test(type)) out.text ||= decoded;
+/** `Name <address>` per mailbox, as a person writes it (mailparser's `text` quotes names). */
+function addresses(field: AddressObject | AddressObject[] | undefined): string {
+  const list = (Array.isArray(field) ? field : field ? [field] : []).flatMap((a) => a.value);
+  return list.map((a) => (a.name ? `${a.name} <${a.address ?? ''}>` : (a.address ?? ''))).join(', ');
 }
 
 /** Subject, addresses and the text and HTML bodies of a raw RFC 5322 message. */
-export function parseMail(raw: string): ParsedMail {
-  const { headers } = splitHead(raw);
-  const out = { text: '', html: '' };
-  collect(raw, out);
+export async function parseMail(raw: Buffer | string | Readable): Promise<ParsedMail> {
+  // Only the parts the mailbox shows: no text-to-HTML conversion, no link rewriting.
+  const m = await simpleParser(raw, { skipTextToHtml: true, skipTextLinks: true, skipImageLinks: true });
   return {
-    subject: decodeHeader(headers.get('subject') ?? ''),
-    from: decodeHeader(headers.get('from') ?? ''),
-    to: decodeHeader(headers.get('to') ?? ''),
-    // SMTP lines end in CRLF (RFC 5321); readers of the mailbox want plain newlines.
-    text: out.text.replace(/\r\n/g, '\n').trimEnd(),
-    html: out.html.replace(/\r\n/g, '\n').trimEnd(),
+    subject: m.subject ?? '',
+    from: addresses(m.from),
+    to: addresses(m.to),
+    // Readers of the mailbox want plain newlines and no trailing blank lines.
+    text: (m.text ?? '').replace(/\r\n/g, '\n').trimEnd(),
+    html: (typeof m.html === 'string' ? m.html : '').replace(/\r\n/g, '\n').trimEnd(),
   };
 }
