@@ -35,6 +35,8 @@ import { createShareService } from './modules/share/share.service.ts';
 import { printJobsRoutes } from './modules/downloads/print-jobs.routes.ts';
 import { createPrintJobsService } from './modules/downloads/print-jobs.service.ts';
 import type { PrintJobLimits } from './modules/downloads/print-job-table.ts';
+import { standardsRoutes } from './modules/standards/standards.routes.ts';
+import { createStandardsService } from './modules/standards/standards.service.ts';
 
 export interface AppDeps {
   db: Knex;
@@ -125,6 +127,7 @@ export function createApp({ db, config, clientDir = CLIENT_DIR, log, mail, print
   api.use(membersRoutes(createMembersService(db, repos.members, repos.audit)));
   api.use(invitesRoutes(createInvitesService(deps, repos.invites, repos.members), { service: authService, repo: authRepo, lucia }, config));
   api.use(settingsRoutes(repos.follows));
+  api.use(standardsRoutes(createStandardsService(db)));
   // The development mailbox exists only outside production and only with a fake SMTP server.
   const mailbox = config.env !== 'production' ? mail?.mailbox : undefined;
   if (mailbox) api.use(devMailApiRoutes(mailbox));

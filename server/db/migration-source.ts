@@ -4,6 +4,7 @@
 import type { Knex } from 'knex';
 import * as accounts from '../../db/migrations/20261202023500_accounts.ts';
 import * as patternLibrary from '../../db/migrations/20261202041000_pattern_library.ts';
+import * as shopStandards from '../../db/migrations/20261203114000_shop_standards.ts';
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -14,6 +15,7 @@ interface Migration {
 export const MIGRATIONS: ReadonlyArray<readonly [name: string, migration: Migration]> = [
   ['20261202023500_accounts.ts', accounts],
   ['20261202041000_pattern_library.ts', patternLibrary],
+  ['20261203114000_shop_standards.ts', shopStandards],
 ];
 
 /** Knex `migrations.migrationSource` over {@link MIGRATIONS}. */

@@ -66,6 +66,9 @@ export const PERMISSIONS = {
   'settings.read': { method: 'GET', path: '/me/settings', actors: ALL },
   'settings.update': { method: 'PATCH', path: '/me/settings', actors: ALL },
   'devmail.read': { method: 'GET', path: '/dev/mail', actors: OWNER },
+  'standards.read': { method: 'GET', path: '/shop/standards', actors: ALL },
+  'standards.update': { method: 'PUT', path: '/shop/standards', actors: OWNER },
+  'standards.start': { method: 'GET', path: '/shop/standards/start/:kind', actors: ALL },
 } as const satisfies Record<string, RoutePermission>;
 
 /** A name in {@link PERMISSIONS}, e.g. `'revisions.create'`. */

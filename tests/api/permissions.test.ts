@@ -135,6 +135,9 @@ const SAMPLES: Record<Action, { scope: Scope; make: (c: Ctx) => Promise<Sample> 
   'settings.read': { scope: 'shop', make: async () => ({ path: '/api/me/settings' }) },
   'settings.update': { scope: 'shop', make: async () => ({ path: '/api/me/settings', body: { notifyOnFollowedRevisions: false } }) },
   'devmail.read': { scope: 'shop', make: async () => ({ path: '/api/dev/mail' }) },
+  'standards.read': { scope: 'shop', make: async () => ({ path: '/api/shop/standards' }) },
+  'standards.update': { scope: 'shop', make: async () => ({ path: '/api/shop/standards', body: { units: 'mm', hardware: [{ id: 'd-ring-1in', kind: 'd-ring', name: '1 in D-ring', insideWidthMm: 25.4, unitCostCents: 120 }] } }) },
+  'standards.start': { scope: 'shop', make: async () => ({ path: '/api/shop/standards/start/collar' }) },
 };
 
 /** The status family the table says `who` gets for `action`. */
