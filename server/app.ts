@@ -27,6 +27,8 @@ import { membersRoutes } from './modules/members/members.routes.ts';
 import { createMembersService } from './modules/members/members.service.ts';
 import { settingsRoutes } from './modules/settings/settings.routes.ts';
 import { downloadsRoutes } from './modules/downloads/downloads.routes.ts';
+import { trialPrintRoutes } from './modules/downloads/trial-print.routes.ts';
+import { thumbnailRoutes } from './modules/downloads/thumbnail.routes.ts';
 import { compareRoutes } from './modules/compare/compare.routes.ts';
 import { transferRoutes } from './modules/transfer/transfer.routes.ts';
 import { createTransferService } from './modules/transfer/transfer.service.ts';
@@ -120,6 +122,8 @@ export function createApp({ db, config, clientDir = CLIENT_DIR, log, mail, print
   api.use(transferRoutes(createTransferService(deps), patterns, config));
   api.use(patternsRoutes(patterns, revisions));
   api.use(downloadsRoutes(deps, revisions));
+  api.use(trialPrintRoutes(deps));
+  api.use(thumbnailRoutes(deps, revisions));
   api.use(compareRoutes(deps));
   const shares = createShareService(deps, repos.shares);
   api.use(shareRoutes(shares));

@@ -5,6 +5,7 @@
 import { z } from 'zod';
 import { EmailSchema, PersonNameSchema, NewPasswordSchema, RoleSchema, type Role } from './auth.ts';
 import { PRESET_NAMES, StrapSpecSchema, type StrapSpec } from './strap-spec.ts';
+import type { HeadFit } from './head-fit.ts';
 
 /** Longest pattern name. */
 export const PATTERN_NAME_MAX_CHARS = 120;
@@ -135,7 +136,8 @@ export interface PatternWithHead {
 }
 /** `GET /api/patterns`. */
 export interface PatternPage {
-  items: Array<PatternView & { head: Omit<RevisionView, 'spec'> }>;
+  /** `head.fit`: the head's girth or size range for the card (the spec itself is not sent). */
+  items: Array<PatternView & { head: Omit<RevisionView, 'spec'> & { fit: HeadFit } }>;
   nextCursor: string | null;
 }
 /** One member in `GET /api/shop/members`. */

@@ -43,6 +43,9 @@ export const PERMISSIONS = {
   'print.jobs.create': { method: 'POST', path: '/patterns/:id/revisions/:n/print-jobs', actors: ALL },
   'print.jobs.read': { method: 'GET', path: '/print-jobs/:jobId', actors: ALL },
   'print.jobs.file': { method: 'GET', path: '/print-jobs/:jobId/file', actors: ALL },
+  // Apprentices print saved revisions (also at a customer's girth, `girth=` on the pdf route), never values of their own: EDIT only.
+  'print.trial': { method: 'POST', path: '/patterns/:id/trial-print', actors: EDIT },
+  'print.thumbnail': { method: 'GET', path: '/patterns/:id/revisions/:n/thumbnail.svg', actors: ALL },
   'share.list': { method: 'GET', path: '/patterns/:id/shares', actors: EDIT },
   'share.create': { method: 'POST', path: '/patterns/:id/share', actors: EDIT },
   'share.revoke': { method: 'DELETE', path: '/share/:shareId', actors: EDIT },

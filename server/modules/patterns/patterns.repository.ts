@@ -21,6 +21,8 @@ export interface ListedRow extends PatternRow {
   head_author_id: number | null;
   head_author_name: string | null;
   head_restored_from: number | null;
+  /** The head's spec JSON: the card shows its girth or size range (and the thumbnail's revision). */
+  head_spec: string;
   following: number;
 }
 /** Position after the last row of a page: its sort key and id. */
@@ -61,6 +63,7 @@ export function createPatternsRepository(db: Knex) {
           'r.author_id as head_author_id',
           'a.name as head_author_name',
           'r.restored_from as head_restored_from',
+          'r.spec as head_spec',
           db.raw('f.user_id IS NOT NULL as following'),
         );
       if (f.archived !== 'all') q.where('p.archived', f.archived === 'true');

@@ -2,6 +2,7 @@
 import type { ListPatternsQuery, PatternPage, PatternView, PatternWithHead } from '@shared/schemas/library.ts';
 import type { ActivityItem } from '@shared/schemas/library-views.ts';
 import type { StrapSpec } from '@shared/schemas/strap-spec.ts';
+import { headFit } from '@shared/schemas/head-fit.ts';
 import { writeTransaction } from '../../db/write-transaction.ts';
 import { badInput } from '../../http/http-error.ts';
 import type { AuthContext } from '../../http/session.ts';
@@ -50,6 +51,7 @@ export function createPatternsService(deps: LibraryDeps) {
             createdAt: iso(r.head_created_at),
             author: r.head_author_id !== null ? { id: r.head_author_id, name: r.head_author_name ?? '' } : null,
             restoredFrom: r.head_restored_from,
+            fit: headFit(JSON.parse(r.head_spec) as StrapSpec),
           },
         })),
         nextCursor: rows.length > q.limit && last ? encodeCursor({ key: q.sort === 'name' ? last.name : Number(last.updated_at), id: last.id }) : null,

@@ -44,6 +44,7 @@ export async function printRevisionInline(
     options: opts,
     date: revisionDate(meta.date).date,
     kind: spec.kind,
+    ...(meta.footerNote ? { footerNote: meta.footerNote } : {}),
     ...(opts.jobSheet ? { jobSheet: jobSheetFromRun(layouts) } : {}),
     onProgress: (done, total) => onProgress?.({ stage: 'pages', done, total }),
   });

@@ -11,6 +11,10 @@ export interface RevisionMeta {
   date: Date | string;
   /** The pattern's graded sizes, when it has a run (`size=M` or `size=all` pick from them). */
   sizes?: readonly SizeDef[];
+  /** Added to the title block's revision row, e.g. "at 14 in girth" or "from rev 3". */
+  revisionNote?: string;
+  /** Printed first on every page's footer line, e.g. that the values are not saved. */
+  footerNote?: string;
 }
 
 /** The date as a Date and as the title block's "YYYY-MM-DD". */
@@ -32,7 +36,8 @@ export interface RevisionDrawing {
  */
 export function revisionDrawing(spec: StrapSpec, options: Pick<PrintOptions, 'size'>, meta: RevisionMeta, onEach?: (done: number, total: number) => void): RevisionDrawing {
   const { text: dateText } = revisionDate(meta.date);
-  const revision = typeof meta.revision === 'number' ? `rev ${meta.revision}` : meta.revision;
+  const revisionText = typeof meta.revision === 'number' ? `rev ${meta.revision}` : meta.revision;
+  const revision = meta.revisionNote ? `${revisionText} · ${meta.revisionNote}` : revisionText;
   const picked = specsForSize(spec, options.size, meta.sizes);
   const layouts: RevisionDrawing['layouts'] = [];
   const drawings: Drawing[] = [];

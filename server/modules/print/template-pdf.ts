@@ -27,6 +27,8 @@ export interface TemplateInput {
   date?: Date;
   /** Piece kind for the cautions ("collar", "leash", ...); guessed from the title if absent. */
   kind?: string;
+  /** Printed first on every page's footer line (a trial print says it is not saved). */
+  footerNote?: string;
   /** Called after each page is drawn (done, total), for progress on long runs. */
   onProgress?: (done: number, total: number) => void;
 }
@@ -103,7 +105,8 @@ export async function buildTemplatePdf(input: TemplateInput): Promise<Buffer> {
     title: [t.pattern, t.revision, t.size].filter(Boolean).join(' · '),
     ...(input.date ? { date: input.date } : {}),
   });
-  const caution = cautionLine(cautionKind(input.kind ?? `${t.pattern} ${drawing.pieces.map((p) => p.name).join(' ')}`));
+  const cautions = cautionLine(cautionKind(input.kind ?? `${t.pattern} ${drawing.pieces.map((p) => p.name).join(' ')}`));
+  const caution = input.footerNote ? `${input.footerNote} · ${cautions}` : cautions;
   const withJobSheet = options.jobSheet && input.jobSheet !== undefined;
   const total = plan.pages.length + (withJobSheet ? 1 : 0);
   const place: PlaceContext = {
@@ -125,7 +128,7 @@ export async function buildTemplatePdf(input: TemplateInput): Promise<Buffer> {
     // It is counted in every sheet's "Page n of N", so it says its own number too.
     const x = jf.band.minX + SQUARE_BLOCK_MM + 2;
     textMm(doc, `Page ${total} of ${total}`, x, jf.band.minY + 4, { capMm: 3, weight: 'bold' });
-    textMm(doc, `job sheet · ${t.pattern}`, x, jf.band.minY + 8.6, { capMm: 2, maxWidthMm: jf.band.maxX - x });
+    textMm(doc, [input.footerNote, `job sheet · ${t.pattern}`].filter(Boolean).join(' · '), x, jf.band.minY + 8.6, { capMm: 2, maxWidthMm: jf.band.maxX - x });
     input.onProgress?.(total, total);
   }
   return finishDoc(doc);
