@@ -2,7 +2,7 @@
 import nodemailer from 'nodemailer';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { writeTransaction } from '../../server/db/write-transaction.ts';
-import { MAX_ATTEMPTS, createOutbox } from '../../server/modules/mail/outbox.ts';
+import { MAX_ATTEMPTS, RETRY_AFTER_MS, createOutbox, type OutboxTimers } from '../../server/modules/mail/outbox.ts';
 import { startFakeSmtp, type FakeSmtp } from '../../server/modules/mail/fake-smtp.ts';
 import { createTestApp, type TestApp } from '../helpers/test-app.ts';
 
@@ -47,5 +47,27 @@ describe('outbox', () => {
     expect(row.attempts).toBe(MAX_ATTEMPTS);
     expect(row.last_error).toBeTruthy();
     smtp = await startFakeSmtp();
+  });
+
+  it('when a whole batch fails, then a retry is scheduled 30 s later, and when it runs with the server back the mail goes out', async () => {
+    const port = smtp.port;
+    await smtp.close();
+    // Injected timers: the retry is run by the test, not by waiting 30 s.
+    const scheduled: { run: () => void; ms: number }[] = [];
+    const timers: OutboxTimers = { schedule: (run, ms) => (scheduled.push({ run, ms }), () => undefined), now: () => Date.UTC(2026, 11, 3, 9) };
+    const transport = nodemailer.createTransport({ host: '127.0.0.1', port, secure: false, ignoreTLS: true });
+    const outbox = createOutbox(t.db, transport, 'Latchet <no-reply@latchet.example>', () => undefined, timers);
+    const id = await writeTransaction(t.db, (trx) => outbox.enqueue(trx, mail('later@harrowfinch.example')));
+    await outbox.flush();
+    expect(await outbox.statusOf(id)).toBe('queued');
+    expect(scheduled.map((s) => s.ms)).toEqual([RETRY_AFTER_MS]);
+    expect(RETRY_AFTER_MS).toBe(30_000);
+
+    smtp = await startFakeSmtp({ port });
+    scheduled[0]!.run();
+    await outbox.flush();
+    expect(await outbox.statusOf(id)).toBe('sent');
+    expect(Number((await t.db('outgoing_mail').where({ id }).first()).sent_at)).toBe(Date.UTC(2026, 11, 3, 9));
+    expect(smtp.mailbox.messages().map((m) => m.recipients[0])).toEqual(['later@harrowfinch.example']);
   });
 });

@@ -6,6 +6,8 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp, type TestAppOptions } from '../helpers/test-app.ts';
 import { buildWorld, type ShopWorld } from '../helpers/shop-world.ts';
 import { binary, pollJob, postJob, type JobBody } from '../helpers/print-jobs.ts';
+import { freezeDate } from '../helpers/frozen-date.ts';
+import { DEFAULT_PRINT_JOB_LIMITS } from '../../server/modules/downloads/print-job-table.ts';
 
 let t: TestApp | undefined;
 afterEach(async () => {
@@ -138,11 +140,18 @@ describe('print jobs', () => {
     expect(Object.keys(file.body.error.fields ?? {}).length).toBeGreaterThan(0);
   });
 
-  it('when a finished job outlives its keep time, then it answers 404', async () => {
-    const { t, w, jobs } = await world({ deps: { printJobs: { keepMs: 50 } } });
+  it('when a finished job outlives its keep time (15 min), then it answers 404; a millisecond before, it is still there', async () => {
+    // The clock is frozen and moved by hand: a busy machine cannot make the job expire early.
+    const clock = freezeDate();
+    const { t, w, jobs } = await world();
     const job = await postJob(t.app, jobs, { size: 'M' }, w.maker.cookie);
-    await pollJob(t.app, job.url, w.maker.cookie, 10);
-    await new Promise((r) => setTimeout(r, 80));
+    const done = (await pollJob(t.app, job.url, w.maker.cookie, 10)).pop()!;
+    expect(done.state).toBe('done');
+    const keepMs = DEFAULT_PRINT_JOB_LIMITS.keepMs;
+    expect(Date.parse(done.expiresAt)).toBe(clock.now() + keepMs);
+    clock.advance(keepMs - 1);
+    await request(t.app).get(job.url).set('Cookie', w.maker.cookie).expect(200);
+    clock.advance(1);
     const res = await request(t.app).get(job.url).set('Cookie', w.maker.cookie).expect(404);
     expect(res.body.error.message).toMatch(/expired/);
   });

@@ -182,7 +182,7 @@ describe('pattern history and sharing in the browser', () => {
     await expect(names()).resolves.toEqual(['Casual belt, Tobias']);
     await page.getByLabel('Show archived patterns').check();
     await page.waitForURL(/archived=all/);
-    await expect.poll(names, { timeout: 5000 }).toEqual(['Casual belt, Tobias', 'Casual belt, Tobias']);
+    await expect.poll(names).toEqual(['Casual belt, Tobias', 'Casual belt, Tobias']);
     await snap(page, 'history-10-archived-shown');
   });
 

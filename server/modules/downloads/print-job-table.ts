@@ -73,8 +73,11 @@ export class QueueFullError extends Error {
   }
 }
 
-/** The table; `now` is injectable so expiry can be tested without waiting. */
-export function createPrintJobTable(limits: PrintJobLimits = DEFAULT_PRINT_JOB_LIMITS, now: () => number = Date.now) {
+/**
+ * The table. `now` (ms since the epoch) is injectable so expiry is tested by moving a clock,
+ * never by waiting; the default reads Date.now() at each call, so fake timers reach it too.
+ */
+export function createPrintJobTable(limits: PrintJobLimits = DEFAULT_PRINT_JOB_LIMITS, now: () => number = () => Date.now()) {
   const jobs = new Map<string, JobRecord>();
 
   function sweep(): void {

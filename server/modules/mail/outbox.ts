@@ -36,7 +36,25 @@ export function smtpTransport(config: Config, localPort?: number): Transporter {
   });
 }
 
-export function createOutbox(db: Knex, transport: Transporter, from: string, log: (msg: string) => void = console.error): Outbox {
+/** How the outbox waits before a retry and reads the time; tests inject both (no real waits). */
+export interface OutboxTimers {
+  /** Calls `run` after `ms`; returns a cancel function. Must not keep a stopping process alive. */
+  schedule(run: () => void, ms: number): () => void;
+  /** ms since the epoch. */
+  now(): number;
+}
+
+const realTimers: OutboxTimers = {
+  schedule(run, ms) {
+    const timer = setTimeout(run, ms);
+    // A pending retry must not keep a stopping process alive.
+    timer.unref();
+    return () => clearTimeout(timer);
+  },
+  now: () => Date.now(),
+};
+
+export function createOutbox(db: Knex, transport: Transporter, from: string, log: (msg: string) => void = console.error, timers: OutboxTimers = realTimers): Outbox {
   const repo = createMailRepository(db);
   let running: Promise<void> | null = null;
   let again = false;
@@ -49,7 +67,7 @@ export function createOutbox(db: Knex, transport: Transporter, from: string, log
       for (const row of batch) {
         try {
           await transport.sendMail({ from, to: row.to_email, subject: row.subject, text: row.text_body, html: row.html_body });
-          await repo.markSent(row.id, Date.now());
+          await repo.markSent(row.id, timers.now());
           progressed = true;
         } catch (err) {
           const giveUp = row.attempts + 1 >= MAX_ATTEMPTS;
@@ -65,15 +83,13 @@ export function createOutbox(db: Knex, transport: Transporter, from: string, log
     }
   }
 
-  let retry: NodeJS.Timeout | undefined;
+  let retry: (() => void) | undefined;
   function scheduleRetry(): void {
     if (retry) return;
-    retry = setTimeout(() => {
+    retry = timers.schedule(() => {
       retry = undefined;
       flush().catch((err: Error) => log(`mail retry: ${err.message}`));
     }, RETRY_AFTER_MS);
-    // A pending retry must not keep a stopping process alive.
-    retry.unref();
   }
 
   function flush(): Promise<void> {
@@ -95,7 +111,7 @@ export function createOutbox(db: Knex, transport: Transporter, from: string, log
   }
 
   return {
-    enqueue: (trx, mail) => repo.enqueue(trx, mail, Date.now()),
+    enqueue: (trx, mail) => repo.enqueue(trx, mail, timers.now()),
     kick: () => {
       flush().catch((err: Error) => log(`mail flush: ${err.message}`));
     },

@@ -4,6 +4,11 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext } from 'playwright-core';
+import { vi } from 'vitest';
+
+// expect.poll gives up after 1 s by default; on a loaded 2-core machine a redraw can take
+// longer. The bound only guards against hangs, so every E2E file polls for up to 30 s.
+vi.setConfig({ expect: { poll: { timeout: 30_000 } } });
 
 export const CHROMIUM_PATH = '/usr/bin/chromium';
 
@@ -33,6 +38,9 @@ export async function launchBrowser(viewport = { width: 1360, height: 900 }): Pr
     viewport,
     acceptDownloads: true,
   });
+  // Waits (locators, downloads, navigation) only guard against hangs: 60 s, not Playwright's
+  // 30 s, so a machine busy with other suites does not fail a correct page.
+  context.setDefaultTimeout(60_000);
   return {
     context,
     async close() {
