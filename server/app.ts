@@ -37,6 +37,7 @@ import { createShareService } from './modules/share/share.service.ts';
 import { printJobsRoutes } from './modules/downloads/print-jobs.routes.ts';
 import { createPrintJobsService } from './modules/downloads/print-jobs.service.ts';
 import type { PrintJobLimits } from './modules/downloads/print-job-table.ts';
+import type { FileStore } from './modules/storage/file-store.ts';
 import { standardsRoutes } from './modules/standards/standards.routes.ts';
 import { createStandardsService } from './modules/standards/standards.service.ts';
 
@@ -52,6 +53,8 @@ export interface AppDeps {
   mail?: { transport?: Transporter; mailbox?: Mailbox };
   /** Bounds of the in-memory print-job table (queue size, lifetimes); defaults suit a shop. */
   printJobs?: Partial<PrintJobLimits>;
+  /** Where uploaded photos live (default: the disk under config.uploadDir). */
+  fileStore?: FileStore;
 }
 
 /** What createApp exposes beside the app (tests flush mail through it). */

@@ -1,5 +1,6 @@
 // The environment, parsed once at boot. A bad value stops the process with one readable
 // list of every problem instead of failing later in the middle of a request.
+import { dirname, join } from 'node:path';
 import { z } from 'zod';
 
 const intIn = (name: string, min: number, max: number, fallback: number) =>
@@ -26,6 +27,13 @@ const EnvSchema = z.object({
   AUTH_RATE_WINDOW_MINUTES: intIn('AUTH_RATE_WINDOW_MINUTES', 1, 24 * 60, 15),
   /** How long an invite link works. */
   INVITE_TTL_HOURS: intIn('INVITE_TTL_HOURS', 1, 24 * 90, 24 * 7),
+  /** Orders (issue 9): how long a customer's measuring link works. */
+  MEASURE_LINK_TTL_HOURS: intIn('MEASURE_LINK_TTL_HOURS', 1, 24 * 90, 24 * 14),
+  /** Uploaded photos on disk (outside the web root) when no bucket is set; default "uploads" beside the database file (data/uploads). */
+  UPLOAD_DIR: z.string().min(1, { error: 'UPLOAD_DIR must not be empty' }).optional(),
+  /** Largest photo upload (413 beyond) and most photos on one order or pattern. */
+  PHOTO_MAX_KB: intIn('PHOTO_MAX_KB', 16, 51_200, 8192),
+  PHOTOS_PER_ITEM_MAX: intIn('PHOTOS_PER_ITEM_MAX', 1, 200, 12),
   /** Largest pattern file `POST /api/patterns/import` accepts. */
   IMPORT_LIMIT_KB: intIn('IMPORT_LIMIT_KB', 1, 51_200, 2048),
   /** JSON request bodies larger than this answer 413. */
@@ -54,6 +62,11 @@ export interface Config {
   authRateWindowMs: number;
   jsonLimitBytes: number;
   inviteTtlMs: number;
+  /** Orders: measuring-link lifetime, photo storage folder, photo size and count limits. */
+  measureLinkTtlMs: number;
+  uploadDir: string;
+  photoMaxBytes: number;
+  photosPerItemMax: number;
   importLimitBytes: number;
   trustProxy: boolean;
   smtp: { host: string | undefined; port: number; user: string | undefined; password: string | undefined; secure: boolean };
@@ -95,6 +108,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     authRateWindowMs: e.AUTH_RATE_WINDOW_MINUTES * 60_000,
     jsonLimitBytes: e.JSON_LIMIT_KB * 1024,
     inviteTtlMs: e.INVITE_TTL_HOURS * HOUR_MS,
+    measureLinkTtlMs: e.MEASURE_LINK_TTL_HOURS * HOUR_MS,
+    uploadDir: e.UPLOAD_DIR ?? join(dirname(e.DATABASE_FILE), 'uploads'),
+    photoMaxBytes: e.PHOTO_MAX_KB * 1024,
+    photosPerItemMax: e.PHOTOS_PER_ITEM_MAX,
     importLimitBytes: e.IMPORT_LIMIT_KB * 1024,
     trustProxy: e.TRUST_PROXY === '1' || e.TRUST_PROXY === 'true',
     smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT, user: e.SMTP_USER, password: e.SMTP_PASSWORD, secure: e.SMTP_SECURE === 'true' },

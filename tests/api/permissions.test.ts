@@ -11,6 +11,7 @@ import { revisionEtag } from '../../server/modules/revisions/etag.ts';
 import { createTestApp, type TestApp } from '../helpers/test-app.ts';
 import { pollJob, postJob } from '../helpers/print-jobs.ts';
 import { buildWorld, collarWithGirth, type Member, type ShopWorld } from '../helpers/shop-world.ts';
+import { ORDER_SAMPLES } from '../helpers/order-samples.ts';
 
 type Who = Exclude<Actor, 'anonymous'> | 'outsider' | 'anonymous';
 const WHO: Who[] = ['owner', 'maker', 'apprentice', 'outsider', 'anonymous'];
@@ -21,7 +22,7 @@ interface Sample {
   path: string;
   body?: unknown;
   headers?: Record<string, string>;
-  attach?: { field: string; content: string; filename: string };
+  attach?: { field: string; content: string | Buffer; filename: string };
 }
 type Ctx = { t: TestApp; w: ShopWorld; who: Who; me: Member | null };
 
@@ -137,6 +138,7 @@ const SAMPLES: Record<Action, { scope: Scope; make: (c: Ctx) => Promise<Sample> 
   'settings.read': { scope: 'shop', make: async () => ({ path: '/api/me/settings' }) },
   'settings.update': { scope: 'shop', make: async () => ({ path: '/api/me/settings', body: { notifyOnFollowedRevisions: false } }) },
   'devmail.read': { scope: 'shop', make: async () => ({ path: '/api/dev/mail' }) },
+  ...ORDER_SAMPLES,
   'standards.read': { scope: 'shop', make: async () => ({ path: '/api/shop/standards' }) },
   'standards.update': { scope: 'shop', make: async () => ({ path: '/api/shop/standards', body: { units: 'mm', hardware: [{ id: 'd-ring-1in', kind: 'd-ring', name: '1 in D-ring', insideWidthMm: 25.4, unitCostCents: 120 }] } }) },
   'standards.start': { scope: 'shop', make: async () => ({ path: '/api/shop/standards/start/collar' }) },
@@ -177,7 +179,7 @@ for (const action of Object.keys(PERMISSIONS) as Action[]) {
         let req = request(t.app)[method.toLowerCase() as 'get' | 'post' | 'patch' | 'put' | 'delete'](s.path);
         if (me) req = req.set('Cookie', me.cookie);
         for (const [k, v] of Object.entries(s.headers ?? {})) req = req.set(k, v);
-        if (s.attach) req = req.attach(s.attach.field, Buffer.from(s.attach.content), s.attach.filename);
+        if (s.attach) req = req.attach(s.attach.field, typeof s.attach.content === 'string' ? Buffer.from(s.attach.content) : s.attach.content, s.attach.filename);
         else if (s.body !== undefined) req = req.send(s.body as object);
         const res = await req;
         if (want === '2xx') expect(res.status, JSON.stringify(res.body)).toBeGreaterThanOrEqual(200);
