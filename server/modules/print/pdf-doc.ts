@@ -1,5 +1,6 @@
 import { fileURLToPath } from 'node:url';
 import PDFDocument from 'pdfkit';
+import { cacheFontWork, type CacheableFont } from './pdf-font-cache.ts';
 import { mmToPt } from './units.ts';
 
 /** The embedded fonts (IBM Plex Sans, OFL, fonts/): nothing is fetched at print time. */
@@ -23,7 +24,9 @@ function parseOnce(path: string): ParsedFont {
   const scratch = new PDFDocument({ autoFirstPage: false });
   scratch.registerFont('f', path);
   scratch.font('f');
-  return (scratch as unknown as { _font: { font: ParsedFont } })._font.font;
+  const font = (scratch as unknown as { _font: { font: ParsedFont } })._font.font;
+  cacheFontWork(font as unknown as CacheableFont);
+  return font;
 }
 function fonts(): { regular: ParsedFont; bold: ParsedFont } {
   parsed ??= { regular: parseOnce(FONT_FILES.regular), bold: parseOnce(FONT_FILES.bold) };
