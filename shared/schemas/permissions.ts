@@ -110,9 +110,6 @@ export const PERMISSIONS = {
   'standards.read': { method: 'GET', path: '/shop/standards', actors: ALL },
   'standards.update': { method: 'PUT', path: '/shop/standards', actors: OWNER },
   'standards.start': { method: 'GET', path: '/shop/standards/start/:kind', actors: ALL },
-  'standards.read': { method: 'GET', path: '/shop/standards', actors: ALL },
-  'standards.update': { method: 'PUT', path: '/shop/standards', actors: OWNER },
-  'standards.start': { method: 'GET', path: '/shop/standards/start/:kind', actors: ALL },
 } as const satisfies Record<string, RoutePermission>;
 
 /** A name in {@link PERMISSIONS}, e.g. `'revisions.create'`. */
