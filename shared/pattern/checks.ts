@@ -14,10 +14,13 @@ export const HARDWARE_SLACK_MM = { over: 0.5, under: 2 };
 const isFastener = (f: Feature) => f.kind === 'rivet' || f.kind === 'screw' || f.kind === 'snap';
 const isRound = (f: Feature) => f.diameterMm !== undefined;
 
+// Module-level, not inside webMm: webMm runs for every pair of holes, and a closure made per
+// call is renamed (esbuild keepNames, which tsx uses) each time, a cost the profile showed.
+const ext = (f: Feature) => (isRound(f) ? f.diameterMm! / 2 : (f.widthMm ?? 0) / 2);
+const half = (f: Feature) => (f.kind === 'slot' ? Math.max(0, (f.lengthMm ?? 0) - (f.widthMm ?? 0)) / 2 : 0);
+
 /** Shortest leather web between two features on the piece (mm); slots are stadiums. */
 function webMm(a: Feature, b: Feature): number {
-  const ext = (f: Feature) => (isRound(f) ? f.diameterMm! / 2 : (f.widthMm ?? 0) / 2);
-  const half = (f: Feature) => (f.kind === 'slot' ? Math.max(0, (f.lengthMm ?? 0) - (f.widthMm ?? 0)) / 2 : 0);
   const dx = Math.max(0, Math.abs(a.atMm - b.atMm) - half(a) - half(b));
   return Math.hypot(dx, a.yMm - b.yMm) - ext(a) - ext(b);
 }
