@@ -38,6 +38,8 @@ import { printJobsRoutes } from './modules/downloads/print-jobs.routes.ts';
 import { createPrintJobsService } from './modules/downloads/print-jobs.service.ts';
 import type { PrintJobLimits } from './modules/downloads/print-job-table.ts';
 import type { FileStore } from './modules/storage/file-store.ts';
+import { diskFileStore } from './modules/storage/disk-file-store.ts';
+import { ordersModule } from './modules/orders/orders-module.ts';
 import { standardsRoutes } from './modules/standards/standards.routes.ts';
 import { createStandardsService } from './modules/standards/standards.service.ts';
 
@@ -55,6 +57,8 @@ export interface AppDeps {
   printJobs?: Partial<PrintJobLimits>;
   /** Where uploaded photos live (default: the disk under config.uploadDir). */
   fileStore?: FileStore;
+  /** The clock of the orders side (measuring-link expiry, order times); tests move it. */
+  now?: () => number;
 }
 
 /** What createApp exposes beside the app (tests flush mail through it). */
@@ -69,7 +73,7 @@ export const internalsOf = (app: Express) => app.locals.latchet as AppInternals;
 /** Default location of the client build. */
 export const CLIENT_DIR = fileURLToPath(new URL('../dist/client', import.meta.url));
 
-export function createApp({ db, config, clientDir = CLIENT_DIR, log, mail, printJobs }: AppDeps): Express {
+export function createApp({ db, config, fileStore, now, clientDir = CLIENT_DIR, log, mail, printJobs }: AppDeps): Express {
   const app = express();
   app.set('trust proxy', config.trustProxy);
   app.disable('x-powered-by');
@@ -135,6 +139,7 @@ export function createApp({ db, config, clientDir = CLIENT_DIR, log, mail, print
   api.use(invitesRoutes(createInvitesService(deps, repos.invites, repos.members), { service: authService, repo: authRepo, lucia }, config));
   api.use(settingsRoutes(repos.follows));
   api.use(standardsRoutes(createStandardsService(db)));
+  api.use(ordersModule({ ...deps, now: now ?? Date.now, fileStore: fileStore ?? diskFileStore(config.uploadDir) }));
   // The development mailbox exists only outside production and only with a fake SMTP server.
   const mailbox = config.env !== 'production' ? mail?.mailbox : undefined;
   if (mailbox) api.use(devMailApiRoutes(mailbox));

@@ -5,6 +5,7 @@ import type { Knex } from 'knex';
 import * as accounts from '../../db/migrations/20261202023500_accounts.ts';
 import * as patternLibrary from '../../db/migrations/20261202041000_pattern_library.ts';
 import * as shopStandards from '../../db/migrations/20261203114000_shop_standards.ts';
+import * as orders from '../../db/migrations/20261203115500_orders.ts';
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -16,6 +17,7 @@ export const MIGRATIONS: ReadonlyArray<readonly [name: string, migration: Migrat
   ['20261202023500_accounts.ts', accounts],
   ['20261202041000_pattern_library.ts', patternLibrary],
   ['20261203114000_shop_standards.ts', shopStandards],
+  ['20261203115500_orders.ts', orders],
 ];
 
 /** Knex `migrations.migrationSource` over {@link MIGRATIONS}. */

@@ -111,3 +111,14 @@ export function formatGirth(mm: number, unit: GirthUnit): string {
 }
 
 const trimZero = (s: string) => (s.endsWith('.0') ? s.slice(0, -2) : s);
+
+/** What each kind of piece is called in sentences to customers ("a collar"). */
+export const PIECE_WORDS: Record<PresetName, string> = {
+  collar: 'a collar',
+  belt: 'a belt',
+  'watch-strap': 'a watch strap',
+  'bag-strap': 'a bag strap',
+  leash: 'a lead',
+  bracelet: 'a bracelet',
+  keeper: 'a keeper',
+};

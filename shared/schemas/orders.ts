@@ -52,27 +52,32 @@ const day = (label: string) =>
     .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)), { error: `${label} must be a real date` });
 
 // ---- customers and wearers ----
-export const CustomerSchema = z.object({
+const customerFields = {
   name: required('Customer name', CUSTOMER_NAME_MAX_CHARS),
-  email: z.union([z.literal(''), EmailSchema], { error: 'E-mail must be an e-mail address such as maren@example.com' }).default(''),
-  phone: text('Phone', PHONE_MAX_CHARS).default(''),
-  notes: text('Notes', NOTES_MAX_CHARS).default(''),
-});
+  email: z.union([z.literal(''), EmailSchema], { error: 'E-mail must be an e-mail address such as maren@example.com' }),
+  phone: text('Phone', PHONE_MAX_CHARS),
+  notes: text('Notes', NOTES_MAX_CHARS),
+};
+/** `POST /api/customers`. */
+export const CustomerSchema = z.object({ ...customerFields, email: customerFields.email.default(''), phone: customerFields.phone.default(''), notes: customerFields.notes.default('') });
 export type CustomerInput = z.input<typeof CustomerSchema>;
-/** `PATCH /api/customers/:id`: any field of {@link CustomerSchema}. */
-export const UpdateCustomerSchema = CustomerSchema.partial();
+/** `PATCH /api/customers/:id`: any field of {@link CustomerSchema}; absent fields stay as they are. */
+export const UpdateCustomerSchema = z.object(customerFields).partial();
 
 /** What a wearer is: the measuring page's wording depends on it. */
 export const WEARER_KINDS = ['dog', 'cat', 'horse', 'person', 'other'] as const;
 export type WearerKind = (typeof WEARER_KINDS)[number];
 export const WEARER_KIND_LABELS: Record<WearerKind, string> = { dog: 'Dog', cat: 'Cat', horse: 'Horse', person: 'Person', other: 'Other' };
-export const WearerSchema = z.object({
+const wearerFields = {
   name: required('Wearer name', WEARER_NAME_MAX_CHARS),
   kind: z.enum(WEARER_KINDS, { error: `Wearer must be one of ${WEARER_KINDS.join(', ')}` }),
-  notes: text('Notes', NOTES_MAX_CHARS).default(''),
-});
+  notes: text('Notes', NOTES_MAX_CHARS),
+};
+/** `POST /api/customers/:id/wearers`. */
+export const WearerSchema = z.object({ ...wearerFields, notes: wearerFields.notes.default('') });
 export type WearerInput = z.input<typeof WearerSchema>;
-export const UpdateWearerSchema = WearerSchema.partial();
+/** `PATCH /api/wearers/:wearerId`. */
+export const UpdateWearerSchema = z.object(wearerFields).partial();
 
 // ---- measurements ----
 /** Where on the body a girth was taken. */
@@ -157,17 +162,17 @@ export const OrderHardwareSchema = z
 
 const orderFields = {
   dueDate: day('Due date'),
-  quantity: whole('Quantity', 1, ORDER_QUANTITY_MAX).default(1),
+  quantity: whole('Quantity', 1, ORDER_QUANTITY_MAX),
   /** A leather of the shop's pricing list (its id); null when not priced yet. */
-  leatherId: text('Leather', 80).nullable().default(null),
-  leatherColour: text('Leather colour', ORDER_TEXT_MAX_CHARS).default(''),
-  leatherFinish: text('Finish', ORDER_TEXT_MAX_CHARS).default(''),
-  thread: text('Thread', ORDER_TEXT_MAX_CHARS).default(''),
-  notes: text('Notes', NOTES_MAX_CHARS).default(''),
+  leatherId: text('Leather', 80).nullable(),
+  leatherColour: text('Leather colour', ORDER_TEXT_MAX_CHARS),
+  leatherFinish: text('Finish', ORDER_TEXT_MAX_CHARS),
+  thread: text('Thread', ORDER_TEXT_MAX_CHARS),
+  notes: text('Notes', NOTES_MAX_CHARS),
   /** Bench time for one piece, minutes. */
-  benchMinutes: whole('Bench time', 0, BENCH_MINUTES_MAX).default(60),
-  /** Omitted: matched from the pattern's hardware by kind. */
-  hardware: OrderHardwareSchema.optional(),
+  benchMinutes: whole('Bench time', 0, BENCH_MINUTES_MAX),
+  /** Omitted or null: matched from the pattern's hardware by kind. */
+  hardware: OrderHardwareSchema.nullable(),
 };
 
 /** `POST /api/orders`. The customer is the wearer's. */
@@ -177,15 +182,22 @@ export const CreateOrderSchema = z.object({
   /** A saved revision of the pattern (default its head when the order is made). */
   revision: id('Revision').optional(),
   fit: OrderFitSchema,
-  ...orderFields,
+  dueDate: orderFields.dueDate,
+  quantity: orderFields.quantity.default(1),
+  leatherId: orderFields.leatherId.default(null),
+  leatherColour: orderFields.leatherColour.default(''),
+  leatherFinish: orderFields.leatherFinish.default(''),
+  thread: orderFields.thread.default(''),
+  notes: orderFields.notes.default(''),
+  benchMinutes: orderFields.benchMinutes.default(60),
+  hardware: orderFields.hardware.default(null),
 });
 export type CreateOrderInput = z.input<typeof CreateOrderSchema>;
 
-/** `PATCH /api/orders/:id`: any of the order's fields (not its stage: see {@link MoveOrderSchema}). */
+/** `PATCH /api/orders/:id`: any of the order's fields (not its stage: see {@link MoveOrderSchema}); absent fields stay. */
 export const UpdateOrderSchema = z
-  .object({ fit: OrderFitSchema.optional(), ...Object.fromEntries(Object.entries(orderFields).map(([k, v]) => [k, v.optional()])) } as {
-    fit: z.ZodOptional<typeof OrderFitSchema>;
-  } & { [K in keyof typeof orderFields]: z.ZodOptional<(typeof orderFields)[K]> })
+  .object({ fit: OrderFitSchema, ...orderFields })
+  .partial()
   .refine((v) => Object.values(v).some((x) => x !== undefined), { error: 'Change at least one field', path: ['notes'] });
 export type UpdateOrderInput = z.input<typeof UpdateOrderSchema>;
 

@@ -16,7 +16,9 @@ export type AuditAction =
   | 'member.removed'
   | 'invite.sent'
   | 'invite.revoked'
-  | 'invite.accepted';
+  | 'invite.accepted'
+  | 'photo.added'
+  | 'photo.deleted';
 
 export interface AuditEvent {
   shopId: number;

@@ -4,7 +4,7 @@ import type { Knex } from 'knex';
 
 export interface OutgoingMail {
   shopId: number | null;
-  kind: 'invite' | 'revision-saved';
+  kind: 'invite' | 'revision-saved' | 'measure-request' | 'measure-answered' | 'proof-answered';
   to: string;
   subject: string;
   text: string;
