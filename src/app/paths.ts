@@ -22,9 +22,32 @@ export const paths = {
   },
   shop: {
     members: { path: '/shop/members', getHref: () => '/shop/members' },
+    standards: { path: '/shop/standards', getHref: () => '/shop/standards' },
     /** The server's own page (not a client route): link to it with a plain <a>. */
     mail: { path: '/dev/mail', getHref: () => '/dev/mail' },
   },
+  orders: {
+    board: { path: '/orders', getHref: () => '/orders' },
+    table: { path: '/orders/table', getHref: (search?: string) => (search ? `/orders/table?${search}` : '/orders/table') },
+    new: {
+      path: '/orders/new',
+      getHref: (from?: { customerId?: number; wearerId?: number }) => {
+        const q = new URLSearchParams();
+        if (from?.customerId) q.set('customerId', String(from.customerId));
+        if (from?.wearerId) q.set('wearerId', String(from.wearerId));
+        return q.size > 0 ? `/orders/new?${q.toString()}` : '/orders/new';
+      },
+    },
+    detail: { path: '/orders/:id', getHref: (id: number) => `/orders/${id}` },
+  },
+  customers: {
+    list: { path: '/customers', getHref: () => '/customers' },
+    detail: { path: '/customers/:id', getHref: (id: number) => `/customers/${id}` },
+  },
+  pricing: { path: '/shop/pricing', getHref: () => '/shop/pricing' },
+  /** The customer's public pages (links sent by e-mail). */
+  measure: { path: '/measure/:token', getHref: (token: string) => `/measure/${encodeURIComponent(token)}` },
+  proof: { path: '/proof/:token', getHref: (token: string) => `/proof/${encodeURIComponent(token)}` },
   invite: { path: '/invite/:token', getHref: (token: string) => `/invite/${encodeURIComponent(token)}` },
   share: { path: '/s/:token', getHref: (token: string) => `/s/${encodeURIComponent(token)}` },
   auth: {

@@ -45,13 +45,17 @@ export function Component() {
     body = (
       <div className="grid gap-6">
         <div>
-          <p className="text-sm font-medium uppercase tracking-widest text-hide-500">Shared by {data.shopName}</p>
+          <p className="text-sm font-medium uppercase tracking-widest text-hide-500">Shared by {data.shopName} · for makers</p>
           <h1 className="mt-1 text-3xl font-semibold tracking-tight text-hide-900">{data.pattern.name}</h1>
           <p className="mt-1 flex flex-wrap items-center gap-2 text-sm text-hide-600">
             <Badge tone="brass">{kindLabel(data.pattern.kind)}</Badge> Revision {data.revision.number}, {formatWhen(data.revision.createdAt)} · read-only
             {strap && <> · blank {formatLength(strap.blankLengthMm, unit)} × {formatLength(strap.widthMm, unit)}</>}
           </p>
         </div>
+        <Notice tone="info" title="A pattern for makers">
+          This page carries the full-size template and cutting files for someone who will make the piece. Waiting for an order? Your
+          maker sends a separate link to see and approve it.
+        </Notice>
         <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_340px]">
           <div className="grid grid-cols-[minmax(0,1fr)] gap-4">
             <Panel title="Drawing">

@@ -26,6 +26,10 @@ interface NavItem {
 
 function navItems(role: Role): NavItem[] {
   const items: NavItem[] = [{ to: paths.library.getHref(), label: 'Library', end: true }];
+  if (can(role, 'orders.list')) items.push({ to: paths.orders.board.getHref(), label: 'Orders' });
+  if (can(role, 'customers.list')) items.push({ to: paths.customers.list.getHref(), label: 'Customers' });
+  // Everyone reads prices on orders; the settings screen is the owner's.
+  if (can(role, 'pricing.update')) items.push({ to: paths.pricing.getHref(), label: 'Pricing' });
   if (can(role, 'members.list')) items.push({ to: paths.shop.members.getHref(), label: 'Shop' });
   return items;
 }
