@@ -21,9 +21,11 @@ export class HttpError extends Error {
   }
 }
 
-/** 400 with each bad field named. */
-export const badInput = (fields: FieldErrors, message?: string) =>
-  new HttpError(400, 'invalid_input', message ?? Object.entries(fields).map(([f, m]) => (m.startsWith(f) ? m : `${f}: ${m}`)).join('; '), fields);
+/**
+ * 400 with each bad field: `fields` is keyed by path (to place each message beside its input);
+ * the messages name the field by its label, so the summary is just those messages.
+ */
+export const badInput = (fields: FieldErrors, message?: string) => new HttpError(400, 'invalid_input', message ?? Object.values(fields).join('; '), fields);
 
 /** 404 in our format; also what another shop's objects answer, so their existence never leaks. */
 export const notFound = (what = 'resource') => new HttpError(404, 'not_found', `No such ${what}.`);

@@ -7,7 +7,7 @@ import { cutList } from './cut-list.ts';
 import { placeDRings } from './d-rings.ts';
 import { checkShape } from './end-shape.ts';
 import { attachFromEndMm, placeEnd } from './end-features.ts';
-import { EngineError } from './engine-error.ts';
+import { EngineError, fieldError, lengthIn } from './engine-error.ts';
 import { ENGINE_VERSION } from './engine-version.ts';
 import { patternWarnings, pieceWarnings } from './checks.ts';
 import type { Feature, PatternLayout, PieceLayout, Warning } from './layout-types.ts';
@@ -28,21 +28,22 @@ function otherBlankMm(spec: StrapSpec, piece: PieceSpec, t: number, field: strin
     const innerMm = 2 * (spec.widthMm + len.layers * t) + len.easeMm;
     return centrelineFromInnerMm(innerMm, t) + len.overlapMm;
   }
-  throw new EngineError(`${field}.length.kind`, 'only the strap piece takes its length from the girth', 'fixed or keeper');
+  throw fieldError(spec, `${field}.length.kind`, 'only the strap takes its length from the girth; give this piece a blank length or make it a keeper', 'fixed or keeper');
 }
 
 /** Lays out one piece `lengthMm` long. */
 function layoutPiece(spec: StrapSpec, piece: PieceSpec, index: number, lengthMm: number, t: number): { layout: PieceLayout; profile: ReturnType<typeof widthProfile> } {
   const field = `pieces.${index}`;
+  const len = lengthIn(spec);
   if (!(lengthMm > 0) || lengthMm > BLANK_MAX_MM)
-    throw new EngineError(`${field}.length`, `blank length ${lengthMm.toFixed(1)} mm is outside 0-${BLANK_MAX_MM} mm`, `between 0 and ${BLANK_MAX_MM} mm`);
-  if (piece.start.kind === 'adjustable') throw new EngineError(`${field}.start.kind`, 'adjustment holes go at the end (tip) of a piece, not at its datum end', 'fold-over, plain or fold-back');
+    throw fieldError(spec, `${field}.length`, `the blank would be ${len(lengthMm)} long; it must be between 0 and ${len(BLANK_MAX_MM)}`, `between 0 and ${len(BLANK_MAX_MM)}`);
+  if (piece.start.kind === 'adjustable') throw fieldError(spec, `${field}.start.kind`, 'adjustment holes go at the tip, not at the buckle end', 'folded, plain or looped');
   const profile = widthProfile(piece, spec.widthMm, lengthMm);
-  if (profile.x1 - profile.x0 < 0) throw new EngineError(`${field}.end.shape`, `the end shapes (${(lengthMm - (profile.x1 - profile.x0)).toFixed(1)} mm) are longer than the ${lengthMm.toFixed(1)} mm blank`, `less than ${lengthMm.toFixed(1)} mm together`);
-  checkShape(piece.start.shape, profile.startWidthMm, `${field}.start.shape`);
-  checkShape(piece.end.shape, profile.endWidthMm, `${field}.end.shape`);
-  const s = placeEnd(piece.start, 'start', lengthMm, t, spec.foldK, `${field}.start`);
-  const e = placeEnd(piece.end, 'end', lengthMm, t, spec.foldK, `${field}.end`);
+  if (profile.x1 - profile.x0 < 0) throw fieldError(spec, `${field}.end.shape`, `the two end shapes (${len(lengthMm - (profile.x1 - profile.x0))}) are longer than the ${len(lengthMm)} blank`, `less than ${len(lengthMm)} together`);
+  checkShape(piece.start.shape, profile.startWidthMm, `${field}.start.shape`, spec);
+  checkShape(piece.end.shape, profile.endWidthMm, `${field}.end.shape`, spec);
+  const s = placeEnd(piece.start, 'start', lengthMm, t, spec.foldK, `${field}.start`, spec);
+  const e = placeEnd(piece.end, 'end', lengthMm, t, spec.foldK, `${field}.end`, spec);
   const features: Feature[] = [...s.features, ...e.features];
   if (piece.end.kind === 'adjustable') {
     const h = piece.end.holes;
@@ -50,20 +51,24 @@ function layoutPiece(spec: StrapSpec, piece: PieceSpec, index: number, lengthMm:
     const startZone = attachFromEndMm(piece.start, t) * (piece.start.kind === 'plain' ? 1 : 2);
     const first = at[0] ?? 0;
     if (first - h.diameterMm / 2 <= startZone)
-      throw new EngineError(`${field}.end.holes.count`, `tip holes run past the buckle end: ${h.count} holes at ${h.spacingMm.toFixed(2)} mm need ${((h.count - 1) * h.spacingMm + h.firstFromTipMm).toFixed(1)} mm from the tip, ${(lengthMm - startZone).toFixed(1)} mm available`, `at most ${(lengthMm - startZone).toFixed(1)} mm of holes and tip`);
+      throw new EngineError(
+        `${field}.end.holes.count`,
+        `${piece.role === 'strap' ? 'Tip holes' : `${piece.name}: tip holes`}: ${h.count} holes ${len(h.spacingMm)} apart need ${len((h.count - 1) * h.spacingMm + h.firstFromTipMm)} from the tip, ${len(lengthMm - startZone)} available before the buckle end`,
+        `at most ${len(lengthMm - startZone)} of holes and tip`,
+      );
     at.forEach((x, i) => features.push({ kind: 'adjust-hole', atMm: x, yMm: 0, diameterMm: h.diameterMm, punch: nearestPunch(h.diameterMm), layers: 1, label: i === h.nominalIndex ? 'hole (nominal)' : `hole ${i + 1}` }));
   }
   features.sort((a, b) => a.atMm - b.atMm || a.yMm - b.yMm);
   for (const f of features) {
     const half = (f.diameterMm ?? f.lengthMm ?? 0) / 2;
-    if (f.atMm - half < -1e-6 || f.atMm + half > lengthMm + 1e-6) throw new EngineError(`${field}`, `${f.label} at ${f.atMm.toFixed(1)} mm lies outside the ${lengthMm.toFixed(1)} mm blank`, `within 0-${lengthMm.toFixed(1)} mm`);
+    if (f.atMm - half < -1e-6 || f.atMm + half > lengthMm + 1e-6) throw fieldError(spec, `${field}`, `${f.label} at ${len(f.atMm)} lies outside the ${len(lengthMm)} blank`, `within 0 to ${len(lengthMm)}`);
     if (Math.abs(f.yMm) + (f.diameterMm ?? f.widthMm ?? 0) / 2 > profile.at(f.atMm) / 2 + 1e-6)
-      throw new EngineError(`${field}`, `${f.label} at ${f.atMm.toFixed(1)} mm runs off the edge of the ${profile.at(f.atMm).toFixed(1)} mm strap`, `within the width`);
+      throw fieldError(spec, `${field}`, `${f.label} at ${len(f.atMm)} runs off the edge of the ${len(profile.at(f.atMm))} wide leather`, 'within the width');
   }
   const warnings: Warning[] = [];
   const outline = piece.stitchRows.length ? pieceOutline(profile, piece.start.shape, piece.end.shape) : [];
   const stitchRows = piece.stitchRows.flatMap((row, i) => {
-    const r = layoutStitchRow(row, profile, outline, lengthMm, `${field}.stitchRows.${i}`, piece.id);
+    const r = layoutStitchRow(row, profile, outline, lengthMm, `${field}.stitchRows.${i}`, piece.id, spec);
     warnings.push(...r.warnings);
     return r.rows;
   });
@@ -94,9 +99,9 @@ export function computeLayout(spec: StrapSpec): PatternLayout {
   const t = thicknessMm(spec.thickness);
   const strapIdx = spec.pieces.findIndex((p) => p.role === 'strap');
   if (strapIdx < 0 || spec.pieces.filter((p) => p.role === 'strap').length > 1)
-    throw new EngineError('pieces', 'a pattern needs exactly one piece with role "strap"', 'exactly 1 strap piece');
+    throw fieldError(spec, 'pieces', 'a pattern needs exactly one strap piece (the one that takes its length from the girth)', 'exactly 1 strap piece');
   const strap = spec.pieces[strapIdx]!;
-  if (strap.length.kind !== 'girth') throw new EngineError(`pieces.${strapIdx}.length.kind`, 'the strap piece takes its length from the girth', 'girth');
+  if (strap.length.kind !== 'girth') throw fieldError(spec, `pieces.${strapIdx}.length.kind`, 'the strap takes its length from the girth', 'from the girth');
   const others = new Map<number, number>();
   spec.pieces.forEach((p, i) => i !== strapIdx && others.set(i, otherBlankMm(spec, p, t, `pieces.${i}`)));
   let outsideMm = spec.hardware.loopExtraMm;

@@ -1,6 +1,6 @@
 import type { EndSpec } from '../schemas/strap-spec.ts';
 import { bendAllowanceMm, centrelineFromInnerMm } from './bend.ts';
-import { EngineError } from './engine-error.ts';
+import { fieldError, lengthIn, MM_WORDING, type Wording } from './engine-error.ts';
 import type { Feature, FeatureKind } from './layout-types.ts';
 import { nearestPunch } from './punch.ts';
 
@@ -49,7 +49,8 @@ function holeKind(f: string): FeatureKind {
  * the fold line (x' = 2F - x): with a symmetric bend the two straight legs meet point for
  * point, whatever the bend allowance. A listed body hole on a partner's spot is that partner.
  */
-export function placeEnd(end: EndSpec, side: EndSide, lengthMm: number, thicknessMm: number, k: number, field: string): EndPlacement {
+export function placeEnd(end: EndSpec, side: EndSide, lengthMm: number, thicknessMm: number, k: number, field: string, w: Wording = MM_WORDING): EndPlacement {
+  const len = lengthIn(w);
   const toX = (d: number) => (side === 'start' ? d : lengthMm - d);
   const features: Feature[] = [];
   const folds: EndPlacement['folds'] = [];
@@ -65,14 +66,14 @@ export function placeEnd(end: EndSpec, side: EndSide, lengthMm: number, thicknes
   });
   if (end.kind === 'plain') {
     end.holes.forEach((h, i) => {
-      if (h.fromEndMm >= lengthMm) throw new EngineError(`${field}.holes.${i}.fromEndMm`, `hole at ${h.fromEndMm.toFixed(1)} mm lies beyond the ${lengthMm.toFixed(1)} mm blank`, `less than ${lengthMm.toFixed(1)} mm`);
+      if (h.fromEndMm >= lengthMm) throw fieldError(w, `${field}.holes.${i}.fromEndMm`, `${len(h.fromEndMm)} lies beyond the ${len(lengthMm)} blank`, `less than ${len(lengthMm)}`);
       features.push(hole(holeKind(h.fastener), toX(h.fromEndMm), h.yMm, h.diameterMm, 1, h.fastener));
     });
   }
   if (end.kind === 'fold-over' || end.kind === 'fold-back') {
     const foldD = end.kind === 'fold-over' ? end.foldAtMm : foldBackApexMm(end, thicknessMm);
     if (2 * foldD >= lengthMm)
-      throw new EngineError(`${field}.${end.kind === 'fold-over' ? 'foldAtMm' : 'overlapMm'}`, `the fold at ${foldD.toFixed(1)} mm needs a blank over ${(2 * foldD).toFixed(1)} mm, the blank is ${lengthMm.toFixed(1)} mm`, `fold at most half the blank (${(lengthMm / 2).toFixed(1)} mm)`);
+      throw fieldError(w, `${field}.${end.kind === 'fold-over' ? 'foldAtMm' : 'overlapMm'}`, `a fold ${len(foldD)} from the end needs a blank longer than ${len(2 * foldD)}; the blank is ${len(lengthMm)}`, `at most half the blank (${len(lengthMm / 2)})`);
     const F = toX(foldD);
     const barDiameterMm = end.kind === 'fold-over' ? end.barDiameterMm : 0;
     const radiusMm = end.kind === 'fold-over' ? barDiameterMm / 2 : centrelineFromInnerMm(end.loopInnerMm, thicknessMm) / (2 * Math.PI) - thicknessMm / 2;
@@ -80,7 +81,7 @@ export function placeEnd(end: EndSpec, side: EndSide, lengthMm: number, thicknes
     features.push({ kind: 'fold', atMm: F, yMm: 0, layers: 1, label: end.kind === 'fold-over' ? 'fold' : 'loop fold' });
     const body = end.kind === 'fold-over' ? end.bodyHoles.map((h) => ({ ...h, used: false })) : [];
     end.flapHoles.forEach((h, i) => {
-      if (h.fromEndMm >= foldD) throw new EngineError(`${field}.flapHoles.${i}.fromEndMm`, `flap hole at ${h.fromEndMm.toFixed(1)} mm is not on the flap (fold at ${foldD.toFixed(1)} mm)`, `less than ${foldD.toFixed(1)} mm`);
+      if (h.fromEndMm >= foldD) throw fieldError(w, `${field}.flapHoles.${i}.fromEndMm`, `${len(h.fromEndMm)} is not on the flap (the fold is ${len(foldD)} from the end)`, `less than ${len(foldD)}`);
       const x = toX(h.fromEndMm);
       const px = 2 * F - x;
       const kind = holeKind(h.fastener);
@@ -92,12 +93,12 @@ export function placeEnd(end: EndSpec, side: EndSide, lengthMm: number, thicknes
     body.forEach((b, i) => {
       if (b.used) return;
       if (b.fromEndMm <= foldD || b.fromEndMm >= lengthMm)
-        throw new EngineError(`${field}.bodyHoles.${i}.fromEndMm`, `body hole at ${b.fromEndMm.toFixed(1)} mm must lie past the fold (${foldD.toFixed(1)} mm) and on the blank`, `between ${foldD.toFixed(1)} and ${lengthMm.toFixed(1)} mm`);
+        throw fieldError(w, `${field}.bodyHoles.${i}.fromEndMm`, `${len(b.fromEndMm)} must lie past the fold (${len(foldD)} from the end) and on the blank`, `between ${len(foldD)} and ${len(lengthMm)}`);
       features.push(hole(holeKind(b.fastener), toX(b.fromEndMm), b.yMm, b.diameterMm, 1, `${b.fastener}, 1 layer`));
     });
     if (end.kind === 'fold-over' && end.slot) {
       if (end.slot.lengthMm / 2 >= foldD)
-        throw new EngineError(`${field}.slot.lengthMm`, `a ${end.slot.lengthMm.toFixed(1)} mm slot centred on the fold at ${foldD.toFixed(1)} mm runs off the end`, `less than ${(2 * foldD).toFixed(1)} mm`);
+        throw fieldError(w, `${field}.slot.lengthMm`, `a ${len(end.slot.lengthMm)} slot centred on the fold ${len(foldD)} from the end runs off the end`, `less than ${len(2 * foldD)}`);
       features.push({ kind: 'slot', atMm: F, yMm: 0, lengthMm: end.slot.lengthMm, widthMm: end.slot.widthMm, layers: 1, label: 'tongue slot' });
     }
   }

@@ -1,5 +1,5 @@
 import type { EndShape } from '../schemas/strap-spec.ts';
-import { EngineError } from './engine-error.ts';
+import { fieldError, lengthIn, MM_WORDING, type Wording } from './engine-error.ts';
 import type { Prim } from './prims.ts';
 
 /**
@@ -21,16 +21,16 @@ export function shapeDepthMm(shape: EndShape, widthMm: number): number {
 }
 
 /** Throws an {@link EngineError} on `field` when the shape cannot be drawn at this width. */
-export function checkShape(shape: EndShape, widthMm: number, field: string): void {
+export function checkShape(shape: EndShape, widthMm: number, field: string, w: Wording = MM_WORDING): void {
   const h = widthMm / 2;
-  const fmt = (v: number) => v.toFixed(1);
+  const len = lengthIn(w);
   if (shape.kind === 'round' && (shape.radiusMm ?? h) > h + 1e-9)
-    throw new EngineError(`${field}.radiusMm`, `corner radius ${fmt(shape.radiusMm ?? h)} mm is more than half the width (${fmt(h)} mm)`, `at most ${fmt(h)} mm`);
+    throw fieldError(w, `${field}.radiusMm`, `${len(shape.radiusMm ?? h)} is more than half the width (${len(h)})`, `at most ${len(h)}`);
   if (shape.kind === 'clipped' && shape.chamferMm > h + 1e-9)
-    throw new EngineError(`${field}.chamferMm`, `chamfer ${fmt(shape.chamferMm)} mm is more than half the width (${fmt(h)} mm)`, `at most ${fmt(h)} mm`);
+    throw fieldError(w, `${field}.chamferMm`, `${len(shape.chamferMm)} is more than half the width (${len(h)})`, `at most ${len(h)}`);
   // Two arcs tangent to the edges meet in a point only if the point reaches at least w/2.
   if (shape.kind === 'english-point' && shape.depthMm < h - 1e-9)
-    throw new EngineError(`${field}.depthMm`, `an English point needs a depth of at least half the width (${fmt(h)} mm), got ${fmt(shape.depthMm)} mm`, `at least ${fmt(h)} mm`);
+    throw fieldError(w, `${field}.depthMm`, `an English point needs at least half the width (${len(h)}), got ${len(shape.depthMm)}`, `at least ${len(h)}`);
 }
 
 /**

@@ -18,11 +18,13 @@ describe('parseSpec and spec limits', () => {
     for (const n of PRESET_NAMES) expect(StrapSpecSchema.safeParse(presetSpec(n)).success).toBe(true);
   });
 
-  it('when the girth is below the limit, then the error names "girthMm" and the limit', () => {
+  it('when the girth is below the limit, then the error is placed on "girthMm" and reads with the label in the display unit', () => {
     const e = caught(() => parseSpec({ ...presetSpec('collar'), girthMm: 10 }));
     expect(e.field).toBe('girthMm');
     expect(e.limit).toBe(`at least ${GIRTH_MIN_MM}`);
-    expect(e.message).toContain(`${GIRTH_MIN_MM} mm`);
+    // 50 mm is 1.969 in; the limit is shown rounded up to the next 1/32 in so the value shown is accepted.
+    expect(e.message).toBe('Girth must be at least 1 31/32 in');
+    expect(caught(() => parseSpec({ ...presetSpec('collar'), units: 'mm', girthMm: 10 })).message).toBe('Girth must be at least 50 mm');
   });
 
   it('when the tip hole count is 0, then the error path is pieces.0.end.holes.count', () => {
@@ -35,7 +37,7 @@ describe('parseSpec and spec limits', () => {
 
   it('when a required object is missing, then the message says which field is required', () => {
     const { hardware: _h, ...rest } = presetSpec('belt');
-    expect(caught(() => parseSpec(rest)).message).toBe('hardware is required');
+    expect(caught(() => parseSpec(rest)).message).toBe('Hardware is required');
   });
 
   it('when the nominal hole is past the last hole, then computeLayout names the field and the highest allowed index', () => {
@@ -45,7 +47,8 @@ describe('parseSpec and spec limits', () => {
     end.holes.nominalIndex = 5;
     const e = caught(() => computeLayout(s));
     expect(e.field).toBe('pieces.0.end.holes.nominalIndex');
-    expect(e.limit).toBe('at most 4');
+    expect(e.limit).toBe('at most 5');
+    expect(e.message).toBe('Tip hole it is fitted at: there is no hole 6; the tip has 5 holes');
   });
 
   it('when the holes need more strap than there is, then the error says how much they need and how much is available', () => {
@@ -56,7 +59,8 @@ describe('parseSpec and spec limits', () => {
     end.holes.spacingMm = 40;
     const e = caught(() => computeLayout(s));
     expect(e.field).toBe('pieces.0.end.holes.count');
-    expect(e.message).toMatch(/15 holes at 40\.00 mm need 636\.2 mm from the tip, \d+\.\d mm available/);
+    // 14 x 40 mm + 3 in = 636.2 mm = 25 1/16 in (nearest 1/32 in).
+    expect(e.message).toMatch(/^Tip holes: 15 holes 1 9\/16 in apart need 25 1\/16 in from the tip, [\d /]+ in available before the buckle end$/);
   });
 
   it('when options are typed as text, then "14in", "4mm" and fit mode reach the spec in mm', () => {
@@ -70,10 +74,10 @@ describe('parseSpec and spec limits', () => {
 });
 
 describe('parseSpec messages', () => {
-  it('when a length is given as text, then the error says it must be a number of mm (not that it is missing)', () => {
+  it('when a length is given as text, then the error says it must be a length in the display unit (not that it is missing)', () => {
     const e = caught(() => parseSpec({ ...presetSpec('collar'), girthMm: '13in' }));
     expect(e.field).toBe('girthMm');
-    expect(e.message).toBe('girth must be a number of mm');
+    expect(e.message).toBe('Girth must be a length in inches');
     expect(e.limit).toBe('a number');
   });
 

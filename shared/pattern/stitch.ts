@@ -1,6 +1,6 @@
 import type { PieceSpec } from '../schemas/strap-spec.ts';
 import { chainStretch, chainXRange, crossingsAtX, directionAlong, pointAlong, reverseStretch, spanLength, type ChainPlace, type PrimSpan } from './chain-path.ts';
-import { EngineError } from './engine-error.ts';
+import { fieldError, lengthIn, MM_WORDING, type Wording } from './engine-error.ts';
 import type { StitchRowLayout, Warning } from './layout-types.ts';
 import { insetChain } from './offset.ts';
 import type { Prim, Pt } from './prims.ts';
@@ -75,19 +75,20 @@ function line(a: Pt, b: Pt): PrimSpan {
  * row is split at corners; on each run the pitch is stretched or shrunk so holes land at
  * both ends and on every corner, with a warning when the change exceeds the tolerance.
  */
-export function layoutStitchRow(row: Row, profile: WidthProfile, outline: readonly Prim[], lengthMm: number, field: string, pieceId: string): { rows: StitchRowLayout[]; warnings: Warning[] } {
+export function layoutStitchRow(row: Row, profile: WidthProfile, outline: readonly Prim[], lengthMm: number, field: string, pieceId: string, w: Wording = MM_WORDING): { rows: StitchRowLayout[]; warnings: Warning[] } {
+  const len = lengthIn(w);
   const x0 = row.fromRef === 'start' ? row.fromMm : lengthMm - row.fromMm;
   const x1 = row.toRef === 'start' ? row.toMm : lengthMm - row.toMm;
-  if (!(x1 - x0 > row.pitchMm)) throw new EngineError(`${field}.toMm`, `stitch row runs from ${x0.toFixed(1)} to ${x1.toFixed(1)} mm: it must end at least one pitch after it starts`, `end after ${(x0 + row.pitchMm).toFixed(1)} mm`);
-  if (x0 < -1e-6 || x1 > lengthMm + 1e-6) throw new EngineError(`${field}.fromMm`, `stitch row ${x0.toFixed(1)}-${x1.toFixed(1)} mm leaves the ${lengthMm.toFixed(1)} mm blank`, `within 0-${lengthMm.toFixed(1)} mm`);
-  if (row.offsetMm * 2 >= Math.min(profile.at(x0), profile.at(x1))) throw new EngineError(`${field}.offsetMm`, `stitch offset ${row.offsetMm} mm meets the other edge`, `less than half the width`);
+  if (!(x1 - x0 > row.pitchMm)) throw fieldError(w, `${field}.toMm`, `the row runs from ${len(x0)} to ${len(x1)} along the blank; it must finish at least one stitch after it starts`, `after ${len(x0 + row.pitchMm)}`);
+  if (x0 < -1e-6 || x1 > lengthMm + 1e-6) throw fieldError(w, `${field}.fromMm`, `the row from ${len(x0)} to ${len(x1)} runs off the ${len(lengthMm)} blank`, `within 0 to ${len(lengthMm)}`);
+  if (row.offsetMm * 2 >= Math.min(profile.at(x0), profile.at(x1))) throw fieldError(w, `${field}.offsetMm`, `${len(row.offsetMm)} in from one edge meets the other edge`, 'less than half the width');
   const loop = insetChain(outline, row.offsetMm);
   const ext = chainXRange(loop);
   // Past the loop's extent the row simply runs to its far point (a tip, a round end's apex).
   const eps = 1e-9;
   const a = Math.min(Math.max(x0, ext.minX), ext.maxX);
   const b = Math.min(Math.max(x1, ext.minX), ext.maxX);
-  if (!(b - a > row.pitchMm)) throw new EngineError(`${field}.toMm`, `stitch row ${x0.toFixed(1)}-${x1.toFixed(1)} mm is less than one pitch long ${row.offsetMm} mm inside the outline`, `longer than ${row.pitchMm} mm`);
+  if (!(b - a > row.pitchMm)) throw fieldError(w, `${field}.toMm`, `the row from ${len(x0)} to ${len(x1)} is shorter than one stitch once it is ${len(row.offsetMm)} inside the edge`, `longer than ${len(row.pitchMm)}`);
   const A = topBottom(loop, a);
   const B = topBottom(loop, b);
   const cutsStart = x0 > ext.minX + eps;

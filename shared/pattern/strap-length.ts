@@ -1,7 +1,7 @@
 import type { PieceSpec, StrapSpec } from '../schemas/strap-spec.ts';
 import { centrelineFromInnerMm, innerCircumferenceMm } from './bend.ts';
 import { attachFromEndMm } from './end-features.ts';
-import { EngineError } from './engine-error.ts';
+import { fieldError } from './engine-error.ts';
 import type { FitReport } from './layout-types.ts';
 
 /** What the loop round the body holds besides the strap piece itself (mm). */
@@ -35,13 +35,13 @@ export function strapBlankMm(spec: StrapSpec, piece: PieceSpec, mode: 'rule' | '
   const a = attachFromEndMm(piece.start, t);
   const adj = piece.end.kind === 'adjustable' ? piece.end.holes : null;
   if (adj && adj.nominalIndex >= adj.count)
-    throw new EngineError(`${field}.end.holes.nominalIndex`, `nominal hole ${adj.nominalIndex} does not exist among ${adj.count} holes (counted from 0)`, `at most ${adj.count - 1}`);
+    throw fieldError(spec, `${field}.end.holes.nominalIndex`, `there is no hole ${adj.nominalIndex + 1}; the tip has ${adj.count} holes`, `at most ${adj.count}`);
   const beyondNominal = adj ? (adj.count - 1 - adj.nominalIndex) * adj.spacingMm + adj.firstFromTipMm : attachFromEndMm(piece.end, t);
   if (mode === 'rule') {
     const r = spec.rule;
     if (r.measure === 'fixed') return r.blankMm;
     if (r.measure === 'blank') return spec.girthMm + r.allowanceMm;
-    if (!adj) throw new EngineError('rule.measure', 'rule "nominal-hole" needs a strap with adjustment holes', 'blank or fixed');
+    if (!adj) throw fieldError(spec, 'rule.measure', 'measuring to the hole it is fitted at needs a strap with adjustment holes at the tip', 'blank or fixed');
     return a + spec.girthMm + r.allowanceMm + beyondNominal;
   }
   const targetMm = spec.girthMm + spec.easeMm;

@@ -100,7 +100,9 @@ describe('bad input names the field', () => {
       const res = await request(t.app).post(path).send(body).expect(400);
       expect(res.body.error.code).toBe('invalid_input');
       expect(Object.keys(res.body.error.fields)).toEqual([field]);
-      expect(res.body.error.message).toContain(field);
+      // The message names the field by its label ("Shop name"), never its key ("shopName").
+      expect(res.body.error.message.toLowerCase()).toContain(field.replace(/([A-Z])/g, ' $1').toLowerCase());
+      expect(res.body.error.message).not.toMatch(/[a-z][A-Z]/);
     });
   }
 

@@ -134,9 +134,11 @@ describe('print jobs', () => {
     const last = (await pollJob(t.app, job.url, w.maker.cookie, 20)).pop()!;
     expect(last.state).toBe('failed');
     expect(last.error?.code).toBe('invalid_input');
-    expect(last.error?.message).toMatch(/152\.4 mm/);
+    // The collar shows inches: five holes 3/4 in apart need 152.4 mm = 6 in from the tip.
+    expect(last.error?.message).toMatch(/need 6 in from the tip/);
     const file = await request(t.app).get(job.fileUrl).set('Cookie', w.maker.cookie).expect(422);
-    expect(file.body.error.message).toMatch(/tip holes/);
+    expect(file.body.error.message).toMatch(/Tip holes/);
+    expect(file.body.error.message).not.toMatch(/pieces\.|[a-z][A-Z]/);
     expect(Object.keys(file.body.error.fields ?? {}).length).toBeGreaterThan(0);
   });
 

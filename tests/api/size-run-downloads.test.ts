@@ -63,7 +63,8 @@ describe('size runs on save', () => {
     const spec = { ...w.collar.head.spec!, sizes: [run[2]!, { name: 'kitten', girthMm: 100 }] };
     const res = await request(t.app).post(`/api/patterns/${w.collar.pattern.id}/revisions`).set('Cookie', w.maker.cookie).set('If-Match', w.collar.etag).send({ spec, note: 'with a kitten size' }).expect(400);
     expect(res.body.error.fields).toHaveProperty(['spec.sizes.1.girthMm']);
-    expect(res.body.error.fields['spec.sizes.1.girthMm']).toMatch(/size kitten/);
+    // Named by its label and in the pattern's unit: 100 mm = 3 15/16 in; five holes 3/4 in apart need 6 in.
+    expect(res.body.error.fields['spec.sizes.1.girthMm']).toMatch(/^Size kitten \(3 15\/16 in\): Tip holes: 5 holes 3\/4 in apart need 6 in from the tip/);
     const revisions = await request(t.app).get(`/api/patterns/${w.collar.pattern.id}/revisions`).set('Cookie', w.maker.cookie).expect(200);
     expect(revisions.body.items).toHaveLength(1);
   });

@@ -91,6 +91,6 @@ describe('cut outline per end shape (closed form and svg-path-properties)', () =
   });
 
   it('when an English point is shallower than half the width, then the engine refuses it naming the field and the limit', () => {
-    expect(() => computeLayout(plainStrap({ kind: 'english-point', depthMm: 10 }))).toThrow(expect.objectContaining({ field: 'pieces.0.end.shape.depthMm', limit: 'at least 12.7 mm' }));
+    expect(() => computeLayout(plainStrap({ kind: 'english-point', depthMm: 10 }))).toThrow(expect.objectContaining({ field: 'pieces.0.end.shape.depthMm', limit: 'at least 1/2 in' }));
   });
 });

@@ -10,6 +10,7 @@ import { PrintOptionsError } from './print-options.ts';
 export function printErrorToHttp(e: unknown): unknown {
   if (e instanceof PrintOptionsError) return new HttpError(400, 'invalid_input', e.message, Object.fromEntries(e.fields.map((f) => [f.field, f.message])));
   if (e instanceof PagePlanError) return new HttpError(400, 'invalid_input', e.message, { [e.field]: e.message });
-  if (e instanceof EngineError) return new HttpError(400, 'invalid_input', e.toLine(), { [e.field]: e.message });
+  // The engine's message already names the field by its label; its path only keys `fields`.
+  if (e instanceof EngineError) return new HttpError(400, 'invalid_input', e.message, { [e.field]: e.message });
   return e;
 }
