@@ -16,7 +16,26 @@ export const DESCENT_PER_EM = 0.275;
 
 /** Estimated length (mm) of a label set at `sizeMm` (em). */
 export function textLengthMm(text: string, sizeMm: number): number {
-  return [...text].length * sizeMm * GLYPH_ADVANCE;
+  return codePointCount(text) * sizeMm * GLYPH_ADVANCE;
+}
+
+/**
+ * Characters in a string as `[...text].length` counts them (a surrogate pair is one, a lone
+ * surrogate one), without building the array: labels are measured many times per drawing.
+ */
+export function codePointCount(text: string): number {
+  let n = text.length;
+  for (let i = 0; i < text.length - 1; i++) {
+    const c = text.charCodeAt(i);
+    if (c >= 0xd800 && c <= 0xdbff) {
+      const d = text.charCodeAt(i + 1);
+      if (d >= 0xdc00 && d <= 0xdfff) {
+        n--;
+        i++;
+      }
+    }
+  }
+  return n;
 }
 
 /** Estimated box (mm) a label covers: its advance by the font's ascender and descender, turned by its rotation. */

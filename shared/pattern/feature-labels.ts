@@ -1,7 +1,7 @@
 import type { DrawingItem } from '../render/drawing.ts';
 import type { PieceSpec } from '../schemas/strap-spec.ts';
 import { formatLength, formatLengthBare } from '../units/format-length.ts';
-import { ASCENT_PER_EM, DESCENT_PER_EM, LABEL_SIZE_MM, NAME_SIZE_MM, label, labelLine, textLengthMm } from './draw-labels.ts';
+import { ASCENT_PER_EM, codePointCount, DESCENT_PER_EM, GLYPH_ADVANCE, LABEL_SIZE_MM, NAME_SIZE_MM, label, labelLine, textLengthMm } from './draw-labels.ts';
 import { packLanes } from './label-lanes.ts';
 import type { Feature, PieceLayout } from './layout-types.ts';
 
@@ -38,7 +38,7 @@ function stationsOf(features: readonly Feature[], u: 'in' | 'mm'): Station[] {
     const uniq = [...new Set(texts)];
     // Several identical holes across the strap at one station read "2 x ..."; a fold and its slot "fold, slot ...".
     const text = uniq.length === 1 ? uniq[0]! : uniq.join(', ');
-    return { ...s, text, count: uniq.length === 1 ? texts.length : 1 };
+    return { atMm: s.atMm, features: s.features, text, count: uniq.length === 1 ? texts.length : 1 };
   });
 }
 
@@ -51,12 +51,20 @@ export interface PieceLabels {
 function wrap(text: string, maxMm: number): string[] {
   const lines: string[] = [];
   let cur = '';
+  // The line's length is counted as it grows (the same sum textLengthMm would make of the
+  // joined text): measuring the whole line again for every word was quadratic.
+  let curCount = 0;
   for (const w of text.split(' ')) {
-    const next = cur ? `${cur} ${w}` : w;
-    if (cur && textLengthMm(next, LABEL_SIZE_MM) > maxMm) {
+    const count = codePointCount(w);
+    const nextCount = cur ? curCount + 1 + count : count;
+    if (cur && nextCount * LABEL_SIZE_MM * GLYPH_ADVANCE > maxMm) {
       lines.push(cur);
       cur = w;
-    } else cur = next;
+      curCount = count;
+    } else {
+      cur = cur ? `${cur} ${w}` : w;
+      curCount = nextCount;
+    }
   }
   if (cur) lines.push(cur);
   return lines;
