@@ -1,5 +1,5 @@
 import { fileURLToPath } from 'node:url';
-import { defineConfig } from 'vitest/config';
+import { configDefaults, defineConfig } from 'vitest/config';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
 
@@ -25,7 +25,27 @@ export default defineConfig({
   },
   test: {
     root: here('.'),
-    include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'tests/**/*.test.{ts,tsx}'],
+    // Two projects: everything on SQLite, and the API suite again on PostgreSQL (a throwaway
+    // cluster on loopback, tests/pg/global-setup.ts). `--project sqlite` runs only the first;
+    // LATCHET_PG_TESTS=0 leaves the second out.
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: 'sqlite',
+          include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'src/**/*.test.{ts,tsx}', 'tests/**/*.test.{ts,tsx}'],
+          exclude: [...configDefaults.exclude, 'tests/pg/**'],
+        },
+      },
+      ...(process.env.LATCHET_PG_TESTS === '1'
+        ? [
+            {
+              extends: true as const,
+              test: { name: 'postgres', include: ['tests/api/**/*.test.ts', 'tests/pg/**/*.test.ts'], globalSetup: ['tests/pg/global-setup.ts'], setupFiles: ['tests/pg/setup.ts'] },
+            },
+          ]
+        : []),
+    ],
     environment: 'node',
     // Generous: a timeout here only guards against hangs (2 cores, Chromium and PDF work in
     // parallel forks); speed is measured in `npm run bench`, never in tests.

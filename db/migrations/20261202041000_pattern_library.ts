@@ -1,6 +1,7 @@
 // The pattern library: patterns, their immutable revisions, invites, share links, the
 // audit trail, the outgoing mail record (an outbox), follows and per-user settings.
 import type { Knex } from 'knex';
+import { isPostgres } from '../../server/db/dialect.ts';
 
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable('patterns', (t) => {
@@ -34,11 +35,24 @@ export async function up(knex: Knex): Promise<void> {
   });
   // History is never rewritten: any UPDATE fails; a DELETE fails unless its pattern is gone
   // already (the cascade of deleting the whole pattern, e.g. when a demo seed resets).
-  await knex.raw(`CREATE TRIGGER revisions_no_update BEFORE UPDATE ON revisions
-    BEGIN SELECT RAISE(ABORT, 'revisions are immutable'); END`);
-  await knex.raw(`CREATE TRIGGER revisions_no_delete BEFORE DELETE ON revisions
-    WHEN EXISTS (SELECT 1 FROM patterns WHERE id = OLD.pattern_id)
-    BEGIN SELECT RAISE(ABORT, 'revisions are immutable'); END`);
+  // Triggers are not in Knex's schema builder: one version per dialect, same rule.
+  if (isPostgres(knex)) {
+    await knex.raw(`CREATE FUNCTION revisions_immutable() RETURNS trigger LANGUAGE plpgsql AS $$
+      BEGIN
+        IF TG_OP = 'DELETE' AND NOT EXISTS (SELECT 1 FROM patterns WHERE id = OLD.pattern_id) THEN
+          RETURN OLD;
+        END IF;
+        RAISE EXCEPTION 'revisions are immutable';
+      END $$`);
+    await knex.raw('CREATE TRIGGER revisions_no_update BEFORE UPDATE ON revisions FOR EACH ROW EXECUTE FUNCTION revisions_immutable()');
+    await knex.raw('CREATE TRIGGER revisions_no_delete BEFORE DELETE ON revisions FOR EACH ROW EXECUTE FUNCTION revisions_immutable()');
+  } else {
+    await knex.raw(`CREATE TRIGGER revisions_no_update BEFORE UPDATE ON revisions
+      BEGIN SELECT RAISE(ABORT, 'revisions are immutable'); END`);
+    await knex.raw(`CREATE TRIGGER revisions_no_delete BEFORE DELETE ON revisions
+      WHEN EXISTS (SELECT 1 FROM patterns WHERE id = OLD.pattern_id)
+      BEGIN SELECT RAISE(ABORT, 'revisions are immutable'); END`);
+  }
 
   await knex.schema.createTable('invites', (t) => {
     t.increments('id').primary();
@@ -112,8 +126,13 @@ export async function down(knex: Knex): Promise<void> {
   await knex.schema.dropTable('audit_events');
   await knex.schema.dropTable('share_links');
   await knex.schema.dropTable('invites');
-  await knex.raw('DROP TRIGGER IF EXISTS revisions_no_delete');
-  await knex.raw('DROP TRIGGER IF EXISTS revisions_no_update');
-  await knex.schema.dropTable('revisions');
+  if (isPostgres(knex)) {
+    await knex.schema.dropTable('revisions'); // its triggers go with it
+    await knex.raw('DROP FUNCTION IF EXISTS revisions_immutable()');
+  } else {
+    await knex.raw('DROP TRIGGER IF EXISTS revisions_no_delete');
+    await knex.raw('DROP TRIGGER IF EXISTS revisions_no_update');
+    await knex.schema.dropTable('revisions');
+  }
   await knex.schema.dropTable('patterns');
 }

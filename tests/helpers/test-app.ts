@@ -1,5 +1,7 @@
-// A fresh, fully migrated SQLite database per call and the app built on it. Shared by the
-// API tests (supertest on `app`) and the end-to-end tests (startTestServer).
+// A fresh, fully migrated database per call and the app built on it. Shared by the API tests
+// (supertest on `app`) and the end-to-end tests (startTestServer). SQLite by default; in the
+// vitest project `postgres` (tests/pg/setup.ts sets LATCHET_TEST_PG_URL) a new PostgreSQL
+// database copied from the run's migrated template instead.
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -10,6 +12,10 @@ import { createApp, internalsOf, type AppDeps } from '../../server/app.ts';
 import { startFakeSmtp, type Mailbox } from '../../server/modules/mail/fake-smtp.ts';
 import { loadConfig, type Config } from '../../server/config.ts';
 import { migrateLatest, openDb } from '../../server/db/connection.ts';
+import { freshDatabase } from './pg-test-db.ts';
+
+/** True when this test run's databases are PostgreSQL (to skip checks of SQLite itself). */
+export const onPostgres = (): boolean => Boolean(process.env.LATCHET_TEST_PG_URL);
 
 export interface TestApp {
   app: Express;
@@ -34,12 +40,15 @@ export interface TestAppOptions {
   deps?: Partial<Omit<AppDeps, 'db' | 'config'>>;
 }
 
-/** Builds the app on a new temporary database file, migrated to the latest level. */
+/** Builds the app on a new temporary database, migrated to the latest level. */
 export async function createTestApp(options: TestAppOptions = {}): Promise<TestApp> {
   const dir = mkdtempSync(join(tmpdir(), 'latchet-test-'));
   const file = join(dir, 'test.sqlite3');
-  const config = { ...loadConfig({ NODE_ENV: 'test', DATABASE_FILE: file, PORT: '0', ...options.env }), ...options.config };
-  const db = openDb(file);
+  const pgServer = process.env.LATCHET_TEST_PG_URL;
+  const pg = pgServer ? await freshDatabase(pgServer, process.env.LATCHET_TEST_PG_TEMPLATE || undefined) : null;
+  const env = { NODE_ENV: 'test', DATABASE_FILE: file, ...(pg ? { DATABASE_URL: pg.url } : {}), PORT: '0', ...options.env };
+  const config = { ...loadConfig(env), ...options.config };
+  const db = openDb(pg ? pg.url : file);
   await migrateLatest(db);
   const errors: unknown[] = [];
   const smtp = await startFakeSmtp();
@@ -58,6 +67,7 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
       transport.close();
       await smtp.close();
       await db.destroy();
+      await pg?.drop();
       rmSync(dir, { recursive: true, force: true });
     },
   };
