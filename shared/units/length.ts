@@ -1,3 +1,5 @@
+import { parseLength } from './parse-length.ts';
+
 /**
  * Length and leather-thickness units. Everything inside the engine is millimetres; these are
  * the only conversions, used at the edges (parsing input, formatting labels).
@@ -51,30 +53,14 @@ export function thicknessMm(t: Thickness): number {
   return t.unit === 'oz' ? ozToMm(t.value) : t.value;
 }
 
-// "13", "13.5", "1 1/2", "3/16", optionally followed by a unit: in, ", inch(es), mm, cm.
-const LENGTH_RE = /^\s*(?:(\d+(?:\.\d+)?)\s+)?(\d+(?:\.\d+)?)(?:\s*\/\s*(\d+))?\s*(in|inch|inches|"|mm|cm)?\s*$/i;
-
 /**
- * Parses a typed length such as "13in", "1 1/2 in", "3/16in", "330mm" or "33cm" into mm.
- * A bare number takes `defaultUnit`. Returns undefined when the text is not a length.
+ * Parses a typed length such as "13in", "1 1/2 in", "15½", "15-1/2", "3/16in", "330mm" or
+ * "33cm" into mm (see parse-length.ts). A bare number takes `defaultUnit`. Returns undefined
+ * when the text is not a length.
  */
 export function parseLengthMm(text: string, defaultUnit: LengthUnit = 'mm'): number | undefined {
-  const m = LENGTH_RE.exec(text);
-  if (!m) return undefined;
-  const [, whole, num, den, unitRaw] = m;
-  let value: number;
-  if (den !== undefined) {
-    const d = Number(den);
-    if (d === 0) return undefined;
-    value = (whole ? Number(whole) : 0) + Number(num) / d;
-  } else {
-    if (whole !== undefined) return undefined; // "1 5" is not a length
-    value = Number(num);
-  }
-  const unit = (unitRaw ?? defaultUnit).toLowerCase();
-  if (unit === 'mm') return value;
-  if (unit === 'cm') return value * 10;
-  return inToMm(value);
+  const r = parseLength(text, defaultUnit);
+  return r.ok ? r.mm : undefined;
 }
 
 /** Parses "10oz", "10 oz" or "4mm" (bare numbers are ounces) into a {@link Thickness}. */

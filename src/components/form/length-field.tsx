@@ -2,7 +2,7 @@ import { useEffect, useState, type ReactNode } from 'react';
 import { useController, type Control, type FieldPath, type FieldValues } from 'react-hook-form';
 import type { LengthUnit } from '@shared/units/length.ts';
 import { TextField } from '@/components/ui/field.tsx';
-import { lengthToText, textMatches, textToLengthMm } from './length-text.ts';
+import { lengthProblem, lengthToText, textMatches, textToLengthMm } from './length-text.ts';
 
 export interface LengthFieldProps<T extends FieldValues, TOut = T> {
   control: Control<T, unknown, TOut>;
@@ -17,8 +17,9 @@ export interface LengthFieldProps<T extends FieldValues, TOut = T> {
 }
 
 /**
- * A length input over a mm field: shows and accepts the spec's display unit (fractions
- * such as "1 3/16" for inches), writes mm into the form, and shows the schema's message.
+ * A length input over a mm field: shows and accepts the spec's display unit (fractions such
+ * as "1 3/16", "15½" or "15-1/2" for inches, or a length with its own unit such as "381mm"),
+ * writes mm into the form, and shows why typed text is not a length, or the schema's message.
  */
 export function LengthField<T extends FieldValues, TOut = T>({ control, name, label, unit, hint, disabled, wrapperClassName }: LengthFieldProps<T, TOut>) {
   const { field, fieldState } = useController({ control, name });
@@ -31,13 +32,15 @@ export function LengthField<T extends FieldValues, TOut = T>({ control, name, la
   useEffect(() => {
     setText((current) => (textMatches(current, mm, unit) ? current : lengthToText(mm, unit)));
   }, [mm, unit]);
+  // Text that is not a length says why in words ("15x" is not a length; type e.g. 15 1/2 ...).
+  const problem = lengthProblem(typeof label === 'string' ? label : 'This length', text, unit);
 
   return (
     <TextField
       label={label}
       unit={unit}
       hint={hint}
-      error={fieldState.error?.message}
+      error={problem ?? fieldState.error?.message}
       name={field.name}
       ref={field.ref}
       value={text}

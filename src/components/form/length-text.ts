@@ -1,5 +1,6 @@
 import { formatLength, formatMm } from '@shared/units/format-length.ts';
-import { parseLengthMm, type LengthUnit } from '@shared/units/length.ts';
+import type { LengthUnit } from '@shared/units/length.ts';
+import { lengthExample, parseLength } from '@shared/units/parse-length.ts';
 
 /**
  * The text a length input shows for a value in mm: fractional inches to 1/32 in as a maker
@@ -12,16 +13,21 @@ export function lengthToText(mm: number | undefined, unit: LengthUnit): string {
 }
 
 /**
- * Parses what a maker typed ("13", "13.5", "1 3/16", "330 mm", "33cm") into mm; a bare
- * number takes the display unit. Not a length gives NaN, which the spec schema names.
+ * Parses what a maker typed ("13", "13.5", "15½", "15 1/2", "15-1/2", "330 mm", "33cm") into
+ * mm; a bare number takes the display unit. Not a length gives NaN, which the spec schema
+ * names; lengthProblem says why in words.
  */
 export function textToLengthMm(text: string, unit: LengthUnit): number {
-  if (text.trim() === '') return Number.NaN;
   // A leading minus is allowed for ease and allowances that shorten.
-  const negative = /^\s*-/.test(text);
-  const mm = parseLengthMm(text.replace(/^\s*-/, ''), unit);
-  if (mm === undefined) return Number.NaN;
-  return negative ? -mm : mm;
+  const r = parseLength(text, unit, { allowNegative: true });
+  return r.ok ? r.mm : Number.NaN;
+}
+
+/** Why `text` is not a length, as a message beside the field ("Girth: "15x" is not a length; e.g. ..."), or null. */
+export function lengthProblem(label: string, text: string, unit: LengthUnit): string | null {
+  if (text.trim() === '') return null;
+  const r = parseLength(text, unit, { allowNegative: true });
+  return r.ok ? null : `${label}: "${text.trim()}" ${r.reason}; type ${lengthExample(unit)}`;
 }
 
 /** True when `text` still means `mm` (so re-rendering must not rewrite what is being typed). */
