@@ -1,12 +1,14 @@
-// Knex CLI settings (`npm run db:migrate|db:rollback|db:seed`, run through tsx). The CLI
-// switches into db/, so paths are resolved from the repository root here.
+// Knex CLI settings (`npm run db:migrate|db:rollback|db:seed`, run through tsx), on the SQLite
+// file or, with DATABASE_URL, on PostgreSQL. The CLI switches into db/, so paths are resolved
+// from the repository root here.
 import { fileURLToPath } from 'node:url';
 import { resolve } from 'node:path';
 import { knexConfig } from '../server/db/connection.ts';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
-const file = resolve(root, process.env.DATABASE_FILE || 'data/latchet.sqlite3');
-const base = knexConfig(file);
+// DATABASE_URL (postgres://...) wins over DATABASE_FILE, as in the server's config.
+const target = process.env.DATABASE_URL || resolve(root, process.env.DATABASE_FILE || 'data/latchet.sqlite3');
+const base = knexConfig(target);
 
 export default {
   ...base,

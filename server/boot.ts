@@ -1,7 +1,7 @@
 // What `npm start` and the API half of `npm run dev` share: migrate, seed, listen, print.
 import type { Knex } from 'knex';
 import type { Config } from './config.ts';
-import { migrateLatest, openDb } from './db/connection.ts';
+import { describeDatabase, migrateLatest, openDb } from './db/connection.ts';
 import { migrationLevel } from './db/migration-level.ts';
 import { createAuthRepository } from './modules/auth/auth.repository.ts';
 import { listen, stopOnSignals, type RunningServer } from './index.ts';
@@ -14,12 +14,12 @@ import { smtpTransport } from './modules/mail/outbox.ts';
 
 /** Migrates to the latest level and (re)seeds the demo shop. */
 export async function prepareDatabase(config: Config): Promise<Knex> {
-  const db = openDb(config.databaseFile);
+  const db = openDb(config);
   const applied = await migrateLatest(db);
   const level = await migrationLevel(db);
   // Sessions past their idle expiry are dead weight; lucia never sweeps them by itself.
   await createAuthRepository(db).deleteExpiredSessions(Date.now());
-  console.log(`database ${config.databaseFile}: ${applied.length} migration(s) applied now, level ${level.level} (${level.latest})`);
+  console.log(`database ${describeDatabase(config)}: ${applied.length} migration(s) applied now, level ${level.level} (${level.latest})`);
   if (config.env !== 'production') {
     await seedShop(db);
     await seedPatterns(db);

@@ -29,7 +29,7 @@ export function configOrExit(): Config {
 }
 
 /** Opens the database and listens on config.port; the caller has migrated already. */
-export async function listen(config: Config, db: Knex = openDb(config.databaseFile), mail?: AppDeps['mail']): Promise<RunningServer> {
+export async function listen(config: Config, db: Knex = openDb(config), mail?: AppDeps['mail']): Promise<RunningServer> {
   const app = createApp({ db, config, ...(mail ? { mail } : {}) });
   const server = app.listen(config.port, config.host);
   await new Promise<void>((resolve, reject) => server.once('listening', resolve).once('error', reject));
