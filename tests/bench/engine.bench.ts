@@ -1,50 +1,52 @@
-// Engine benchmark (`npm run bench engine`): layouts and SVGs per second for each preset, and
-// one drawing through svg.js over svgdom versus over browser-style DOMs (happy-dom, jsdom).
-// Figures are machine-dependent; the table reports ratios against a baseline measured in the
-// same run (a JSON round trip of the same spec), so runs on different machines compare.
-import { JSDOM } from 'jsdom';
-import { Window } from 'happy-dom';
-import { computeLayout, drawLayout, parseSpec, presetSpec, PRESET_NAMES, type StrapSpec } from '@shared/pattern/index.ts';
-import { renderSvg, type SvgDom } from '@shared/render/svg.ts';
+// Engine benchmark (`npm run bench engine`): layouts and SVGs per second for each preset, a
+// 12-size run, and the SVG writer against the svg.js-over-svgdom reference renderer. Figures
+// depend on the machine and its load; each row also gives the ratio to a baseline measured in
+// the same run (a JSON round trip of the same spec). Targets (issue 10) are per core, so they
+// are checked against operations per CPU second of this process.
+import { computeLayout, drawLayout, gradeSizes, parseSpec, presetSpec, PRESET_NAMES, type StrapSpec } from '@shared/pattern/index.ts';
+import { renderSvg } from '@shared/render/svg.ts';
+import { renderSvgViaDom } from '@shared/render/svg-via-dom.ts';
 import { svgdomDom } from '../../server/render/svgdom-window.ts';
+import { medianMs, num, rate, verdict } from './measure.ts';
 
-/** Runs `fn` repeatedly for about `ms` after a warm-up; returns operations per second. */
-function opsPerSecond(fn: () => unknown, ms = 400): number {
-  for (let i = 0; i < 20; i++) fn();
-  (globalThis as { gc?: () => void }).gc?.();
-  let n = 0;
-  const start = performance.now();
-  let now = start;
-  while (now - start < ms) {
-    for (let i = 0; i < 10; i++) fn();
-    n += 10;
-    now = performance.now();
-  }
-  return (n * 1000) / (now - start);
-}
+const TARGET = { layoutsPerS: 5000, svgsPerS: 1000, runMs: 20 };
 
-const fmt = (v: number) => (v >= 100 ? v.toFixed(0) : v.toFixed(1)).padStart(8);
-const svgdom = svgdomDom();
-const hw = new Window();
-const happy: SvgDom = { window: hw, document: hw.document };
-const jd = new JSDOM('<!doctype html><html><body></body></html>');
-const jsdom: SvgDom = { window: jd.window, document: jd.window.document };
-
-console.log('preset        baseline/s  layouts/s  (x baseline)   svgs/s  (x baseline)');
+console.log('preset        baseline/cpu-s   layouts/s wall  /cpu-s  (x baseline)   svgs/s wall  /cpu-s  (x baseline)');
+const rows: { name: string; layouts: number; svgs: number }[] = [];
 for (const name of PRESET_NAMES) {
   const spec: StrapSpec = presetSpec(name);
-  const baseline = opsPerSecond(() => JSON.parse(JSON.stringify(spec)));
-  const layouts = opsPerSecond(() => computeLayout(parseSpec(spec)));
-  const svgs = opsPerSecond(() => renderSvg(drawLayout(computeLayout(parseSpec(spec)), spec), svgdom), 600);
-  console.log(`${name.padEnd(12)} ${fmt(baseline)}   ${fmt(layouts)}  (${(layouts / baseline).toFixed(4)})  ${fmt(svgs)}  (${(svgs / baseline).toFixed(4)})`);
+  const baseline = rate(() => JSON.parse(JSON.stringify(spec)));
+  const layouts = rate(() => computeLayout(parseSpec(spec)));
+  const svgs = rate(() => renderSvg(drawLayout(computeLayout(parseSpec(spec)), spec)));
+  rows.push({ name, layouts: layouts.perCpuS, svgs: svgs.perCpuS });
+  console.log(
+    `${name.padEnd(12)} ${num(baseline.perCpuS, 14)}   ${num(layouts.perWallS, 14)} ${num(layouts.perCpuS, 7)}  (${(layouts.perCpuS / baseline.perCpuS).toFixed(4)})   ${num(svgs.perWallS, 11)} ${num(svgs.perCpuS, 7)}  (${(svgs.perCpuS / baseline.perCpuS).toFixed(4)})`,
+  );
 }
 
-const spec = presetSpec('watch-strap');
-const drawing = drawLayout(computeLayout(spec), spec);
-const viaSvgdom = opsPerSecond(() => renderSvg(drawing, svgdom), 800);
-const viaHappy = opsPerSecond(() => renderSvg(drawing, happy), 800);
-const viaJsdom = opsPerSecond(() => renderSvg(drawing, jsdom), 800);
-console.log('\nwatch-strap drawing, renders/s by DOM (ratio to svgdom)');
-console.log(`svg.js + svgdom     ${fmt(viaSvgdom)}  (1.00)`);
-console.log(`svg.js + happy-dom  ${fmt(viaHappy)}  (${(viaHappy / viaSvgdom).toFixed(2)})  browser-style DOM`);
-console.log(`svg.js + jsdom      ${fmt(viaJsdom)}  (${(viaJsdom / viaSvgdom).toFixed(2)})  browser-style DOM`);
+// A 12-size collar run, 9 in to 20 in neck: graded (each size laid out) and drawn for printing.
+const collar = presetSpec('collar');
+const sizes = Array.from({ length: 12 }, (_, i) => ({ name: `S${i + 1}`, girthMm: 228.6 + i * 25.4 }));
+const runSpec = parseSpec({ ...collar, sizes });
+const baselineMs = await medianMs(() => JSON.parse(JSON.stringify(runSpec)), 21);
+const gradeMs = await medianMs(() => gradeSizes(runSpec), 21);
+const drawnMs = await medianMs(() => sizes.map((s) => { const one = parseSpec({ ...collar, girthMm: s.girthMm }); return drawLayout(computeLayout(one), one); }), 21);
+console.log(`\n12-size collar run (median of 21)       ms    (x baseline ${baselineMs.toFixed(3)} ms)`);
+console.log(`graded: every size laid out        ${gradeMs.toFixed(2).padStart(8)}    (${(gradeMs / baselineMs).toFixed(1)})`);
+console.log(`laid out and drawn, as for print   ${drawnMs.toFixed(2).padStart(8)}    (${(drawnMs / baselineMs).toFixed(1)})`);
+
+// The SVG writer against the reference it must match byte for byte (shared/render/svg.test.ts).
+const ws = presetSpec('watch-strap');
+const drawing = drawLayout(computeLayout(ws), ws);
+const svgdom = svgdomDom();
+const direct = rate(() => renderSvg(drawing), 800);
+const viaDom = rate(() => renderSvgViaDom(drawing, svgdom), 800);
+console.log('\nwatch-strap drawing, renders per CPU s (ratio to svg.js + svgdom)');
+console.log(`svg.js + svgdom (reference)  ${num(viaDom.perCpuS)}  (1.00)`);
+console.log(`direct writer                ${num(direct.perCpuS)}  (${(direct.perCpuS / viaDom.perCpuS).toFixed(2)})`);
+
+const collarRow = rows.find((r) => r.name === 'collar')!;
+console.log('\ntargets (per CPU second = per core)');
+console.log(`collar layouts/s >= ${TARGET.layoutsPerS}: ${num(collarRow.layouts, 0)}  ${verdict(collarRow.layouts >= TARGET.layoutsPerS)}`);
+console.log(`collar SVGs/s >= ${TARGET.svgsPerS}: ${num(collarRow.svgs, 0)}  ${verdict(collarRow.svgs >= TARGET.svgsPerS)}`);
+console.log(`12-size run graded < ${TARGET.runMs} ms: ${gradeMs.toFixed(2)} ms  ${verdict(gradeMs < TARGET.runMs)}`);

@@ -1,0 +1,60 @@
+// Timing helpers shared by the benchmarks. Rates are taken both per wall-clock second and per
+// CPU second of this process (process.cpuUsage): on a shared machine the wall clock also counts
+// the time other processes ran, while CPU time is what "per core" means.
+
+/** Operations per wall-clock second and per CPU second, each the median of several windows. */
+export interface Rate {
+  perWallS: number;
+  perCpuS: number;
+}
+
+const median = (xs: number[]): number => {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.floor(s.length / 2)] ?? NaN;
+};
+
+/**
+ * Runs `fn` for a warm-up (until the JIT has settled: at least 20 calls and `warmMs`), then in
+ * `windows` windows of about `ms / windows` each; returns the median rates.
+ */
+export function rate(fn: () => unknown, ms = 600, windows = 5, warmMs = 250): Rate {
+  const w0 = performance.now();
+  for (let i = 0; i < 20 || performance.now() - w0 < warmMs; i++) fn();
+  (globalThis as { gc?: () => void }).gc?.();
+  const wall: number[] = [];
+  const cpu: number[] = [];
+  for (let w = 0; w < windows; w++) {
+    let n = 0;
+    const c0 = process.cpuUsage();
+    const t0 = performance.now();
+    let t = t0;
+    while (t - t0 < ms / windows) {
+      for (let i = 0; i < 5; i++) fn();
+      n += 5;
+      t = performance.now();
+    }
+    const c = process.cpuUsage(c0);
+    wall.push((n * 1000) / (t - t0));
+    cpu.push((n * 1e6) / Math.max(1, c.user + c.system));
+  }
+  return { perWallS: median(wall), perCpuS: median(cpu) };
+}
+
+/** Median wall time of `fn` in ms over `runs` runs after `warm` warm-up runs. */
+export async function medianMs(fn: () => unknown, runs = 7, warm = 2): Promise<number> {
+  for (let i = 0; i < warm; i++) await fn();
+  const t: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    (globalThis as { gc?: () => void }).gc?.();
+    const s = performance.now();
+    await fn();
+    t.push(performance.now() - s);
+  }
+  return median(t);
+}
+
+/** A number for a table: no decimals from 100 up, one below. */
+export const num = (v: number, width = 8): string => (v >= 100 ? v.toFixed(0) : v.toFixed(1)).padStart(width);
+
+/** "ok" or "MISSED" for a target. */
+export const verdict = (ok: boolean): string => (ok ? 'ok' : 'MISSED');
