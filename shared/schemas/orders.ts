@@ -6,7 +6,7 @@
  * length messages are written in that unit.
  */
 import { z } from 'zod';
-import { EmailSchema } from './auth.ts';
+import { EMAIL_MAX_CHARS } from './auth.ts';
 import { PRESET_NAMES, type PresetName } from './strap-spec.ts';
 import { MEASURE_KINDS, formatGirth, type GirthUnit } from './measure-kinds.ts';
 
@@ -54,7 +54,13 @@ const day = (label: string) =>
 // ---- customers and wearers ----
 const customerFields = {
   name: required('Customer name', CUSTOMER_NAME_MAX_CHARS),
-  email: z.union([z.literal(''), EmailSchema], { error: 'E-mail must be an e-mail address such as maren@example.com' }),
+  /** Empty, or an address (trimmed, lower-cased). */
+  email: z
+    .string({ error: 'E-mail must be text' })
+    .trim()
+    .toLowerCase()
+    .max(EMAIL_MAX_CHARS, { error: `E-mail must be at most ${EMAIL_MAX_CHARS} characters` })
+    .refine((s) => s === '' || z.email().safeParse(s).success, { error: 'E-mail must be an e-mail address such as maren@example.com' }),
   phone: text('Phone', PHONE_MAX_CHARS),
   notes: text('Notes', NOTES_MAX_CHARS),
 };
