@@ -1,7 +1,7 @@
 // The order's job sheet: the revision's template tiled at the order's girth, then the cut
 // list, hardware, punches, the steps to tick and the cautions (the print module's job sheet),
-// with the order written on the title block and every footer. Each print is logged on the
-// order (who, when, which paper).
+// with the order and its girth on the title block and its number and due date on every
+// footer. Each print is logged on the order (who, when, which paper).
 import type { Knex } from 'knex';
 import { formatLength } from '@shared/units/format-length.ts';
 import { writeTransaction } from '../../db/write-transaction.ts';
@@ -16,8 +16,8 @@ export async function printJobSheet(db: Knex, orders: OrdersRepository, now: () 
   if (!fitted) throw new HttpError(409, 'girth_missing', `Order ${row.number} has no girth yet: the job sheet prints once the wearer is measured.`);
   const girth = formatLength(fitted.girthMm, fitted.spec.units);
   const order = `Order ${row.number}`;
-  const leather = [row.leather_colour, row.leather_finish].filter(Boolean).join(', ');
-  const footer = [`${order} · ${row.wearer_name} (${row.customer_name}) · ${row.quantity} x · due ${row.due_date}`, leather, row.thread ? `thread ${row.thread}` : ''].filter(Boolean).join(' · ');
+  // Short: it shares the one footer line of every page with the cautions, which must stay whole.
+  const footer = `${order} · due ${row.due_date}`;
   let file: PrintedFile;
   try {
     file = await printRevision(
