@@ -59,7 +59,7 @@ export function createPatternsService(deps: LibraryDeps) {
     },
 
     async create(auth: AuthContext, input: { name: string; kind: string; spec: StrapSpec; note: string; tags: string[] }) {
-      if (input.spec.kind !== input.kind) throw badInput({ kind: `kind must match spec.kind (${input.spec.kind})` });
+      if (input.spec.kind !== input.kind) throw badInput({ kind: `Kind of strap must be ${input.spec.kind}, the kind in the pattern's measurements` });
       layoutOrBadInput(input.spec);
       const id = await writeTransaction(db, (trx) =>
         insertPattern(trx, deps, {

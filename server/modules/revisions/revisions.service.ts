@@ -100,7 +100,7 @@ export function createRevisionsService(deps: LibraryDeps) {
       const tags = requireIfMatch(ifMatch);
       layoutOrBadInput(input.spec);
       return append(auth, patternRaw, tags, async (_trx, p) => {
-        if (input.spec.kind !== p.kind) throw badInput({ 'spec.kind': `spec.kind must stay "${p.kind}" (duplicate the pattern to change its kind)` });
+        if (input.spec.kind !== p.kind) throw badInput({ 'spec.kind': `Kind of strap must stay ${p.kind} (duplicate the pattern to change its kind)` });
         return { spec: input.spec, note: input.note, restoredFrom: null };
       });
     },
