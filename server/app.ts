@@ -38,7 +38,7 @@ import { printJobsRoutes } from './modules/downloads/print-jobs.routes.ts';
 import { createPrintJobsService } from './modules/downloads/print-jobs.service.ts';
 import type { PrintJobLimits } from './modules/downloads/print-job-table.ts';
 import type { FileStore } from './modules/storage/file-store.ts';
-import { diskFileStore } from './modules/storage/disk-file-store.ts';
+import { fileStoreFor } from './modules/storage/choose-file-store.ts';
 import { ordersModule } from './modules/orders/orders-module.ts';
 import { standardsRoutes } from './modules/standards/standards.routes.ts';
 import { createStandardsService } from './modules/standards/standards.service.ts';
@@ -55,7 +55,7 @@ export interface AppDeps {
   mail?: { transport?: Transporter; mailbox?: Mailbox };
   /** Bounds of the in-memory print-job table (queue size, lifetimes); defaults suit a shop. */
   printJobs?: Partial<PrintJobLimits>;
-  /** Where uploaded photos live (default: the disk under config.uploadDir). */
+  /** Where uploaded photos live (default: S3_BUCKET when set, else the disk under config.uploadDir). */
   fileStore?: FileStore;
   /** The clock of the orders side (measuring-link expiry, order times); tests move it. */
   now?: () => number;
@@ -139,7 +139,7 @@ export function createApp({ db, config, fileStore, now, clientDir = CLIENT_DIR, 
   api.use(invitesRoutes(createInvitesService(deps, repos.invites, repos.members), { service: authService, repo: authRepo, lucia }, config));
   api.use(settingsRoutes(repos.follows));
   api.use(standardsRoutes(createStandardsService(db)));
-  api.use(ordersModule({ ...deps, now: now ?? Date.now, fileStore: fileStore ?? diskFileStore(config.uploadDir) }));
+  api.use(ordersModule({ ...deps, now: now ?? Date.now, fileStore: fileStore ?? fileStoreFor(config) }));
   // The development mailbox exists only outside production and only with a fake SMTP server.
   const mailbox = config.env !== 'production' ? mail?.mailbox : undefined;
   if (mailbox) api.use(devMailApiRoutes(mailbox));

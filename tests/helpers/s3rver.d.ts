@@ -1,0 +1,19 @@
+// The part of s3rver (a local S3-compatible server for tests; no types of its own) we use.
+declare module 's3rver' {
+  import type { AddressInfo } from 'node:net';
+
+  interface S3rverOptions {
+    address?: string;
+    port?: number;
+    silent?: boolean;
+    directory: string;
+    resetOnClose?: boolean;
+    configureBuckets?: Array<{ name: string }>;
+  }
+
+  export default class S3rver {
+    constructor(options: S3rverOptions);
+    run(): Promise<AddressInfo>;
+    close(): Promise<void>;
+  }
+}
