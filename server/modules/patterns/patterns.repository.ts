@@ -1,6 +1,7 @@
 // Pattern rows: the library listing (keyset pages), one pattern of a shop, and its changes.
 import type { Knex } from 'knex';
 import type { ListPatternsQuery } from '@shared/schemas/library.ts';
+import { caseFoldedAfter, caseFoldedOrder, containsIgnoringCase, jsonArrayHas } from '../../db/dialect.ts';
 
 export interface PatternRow {
   id: number;
@@ -68,11 +69,12 @@ export function createPatternsRepository(db: Knex) {
         );
       if (f.archived !== 'all') q.where('p.archived', f.archived === 'true');
       if (f.kind) q.where('p.kind', f.kind);
-      if (f.tag) q.whereRaw('EXISTS (SELECT 1 FROM json_each(p.tags) WHERE json_each.value = ?)', [f.tag]);
-      if (f.query) q.whereRaw("p.name LIKE ? ESCAPE '\\' COLLATE NOCASE", [`%${f.query.replace(/[\\%_]/g, (c) => `\\${c}`)}%`]);
+      // Dialect-specific SQL (SQLite or PostgreSQL) comes from server/db/dialect.ts.
+      if (f.tag) q.where(jsonArrayHas(db, 'p.tags', f.tag));
+      if (f.query) q.where(containsIgnoringCase(db, 'p.name', f.query));
       if (f.sort === 'name') {
-        if (after) q.whereRaw('(p.name COLLATE NOCASE, p.id) > (?, ?)', [after.key, after.id]);
-        q.orderByRaw('p.name COLLATE NOCASE ASC, p.id ASC');
+        if (after) q.where(caseFoldedAfter(db, 'p.name', 'p.id', String(after.key), after.id));
+        q.orderByRaw(caseFoldedOrder(db, 'p.name', 'p.id'));
       } else {
         if (after) q.whereRaw('(p.updated_at, p.id) < (?, ?)', [after.key, after.id]);
         q.orderBy([{ column: 'p.updated_at', order: 'desc' }, { column: 'p.id', order: 'desc' }]);
