@@ -7,16 +7,19 @@ import type { StrapSpec } from './strap-spec.ts';
 export interface HeadFit {
   units: StrapSpec['units'];
   girthMm: number;
+  /** False for straps that do not close round the body (bag strap, leash): the girth is their working length. */
+  closes: boolean;
   /** Present when the head has a size run: how many sizes and their smallest and largest girth. */
   run?: { count: number; minGirthMm: number; maxGirthMm: number };
 }
 
 /** The card's fit summary of a stored spec (read defensively: older specs may lack `sizes`). */
-export function headFit(spec: Pick<StrapSpec, 'units' | 'girthMm'> & { sizes?: readonly { girthMm: number }[] }): HeadFit {
+export function headFit(spec: Pick<StrapSpec, 'units' | 'girthMm' | 'closes'> & { sizes?: readonly { girthMm: number }[] }): HeadFit {
   const girths = (spec.sizes ?? []).map((s) => s.girthMm);
   return {
     units: spec.units,
     girthMm: spec.girthMm,
+    closes: spec.closes !== false,
     ...(girths.length > 0 ? { run: { count: girths.length, minGirthMm: Math.min(...girths), maxGirthMm: Math.max(...girths) } } : {}),
   };
 }

@@ -92,7 +92,7 @@ describe('a saved revision at a customer girth', () => {
 describe('library cards', () => {
   it('when the library is listed, then each card carries the head girth in the display unit source (mm + unit)', async () => {
     const res = await request(t.app).get('/api/patterns').set('Cookie', w.apprentice.cookie).expect(200);
-    expect(res.body.items[0].head.fit).toEqual({ units: 'in', girthMm: w.collar.head.spec!.girthMm });
+    expect(res.body.items[0].head.fit).toEqual({ units: 'in', girthMm: w.collar.head.spec!.girthMm, closes: true });
     expect(res.body.items[0].head.spec).toBeUndefined();
   });
 

@@ -76,8 +76,9 @@ describe('the pattern library in the browser', () => {
     expect(after).not.toBe(before);
     await snap(page, 'library-04-girth-changed');
     await snapElement(page.getByTestId('drawing-preview'), 'library-04a-preview-whole');
-    await page.getByRole('button', { name: 'Full size' }).click();
-    await snapElement(page.getByTestId('drawing-preview'), 'library-04b-preview-full-size');
+    await page.getByRole('button', { name: 'Zoom in' }).click();
+    await page.getByRole('button', { name: 'Zoom in' }).click();
+    await snapElement(page.getByTestId('drawing-preview'), 'library-04b-preview-zoomed');
     await page.getByRole('button', { name: 'Whole strap' }).click();
   });
 

@@ -1,18 +1,20 @@
 import { useState } from 'react';
 import { useForm, useWatch, type FieldPath } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { StrapSpecSchema, type StrapSpec, type StrapSpecInput } from '@shared/schemas/strap-spec.ts';
-import { presetSpec } from '@shared/pattern/presets/index.ts';
 import { isApiError } from '@/lib/api-client.ts';
-import { Button } from '@/components/ui/button.tsx';
+import { specResolver } from '@/lib/spec-resolver.ts';
 import { kindLabel } from '../../kinds.ts';
 import { Panel } from '@/components/ui/panel.tsx';
-import { Notice } from '@/components/ui/notice.tsx';
+import { Button, buttonClass } from '@/components/ui/button.tsx';
 import { useFetchLatest, useSaveRevision } from '../../api/mutations.ts';
 import type { PatternDetail } from '../../api/queries.ts';
 import { SpecFields } from '../spec-form/spec-fields.tsx';
+import { presetSpec } from '@shared/pattern/presets/index.ts';
 import { Downloads } from './downloads.tsx';
-import { LivePreview } from './live-preview.tsx';
+import { PreviewDetails } from './live-preview.tsx';
+import { BenchCard } from './bench-card.tsx';
+import { BenchLayout } from './bench-layout.tsx';
+import { useLiveDraft } from './use-live-draft.ts';
 import { SavePanel, type Conflict } from './save-panel.tsx';
 import { SharePanel } from './share-panel.tsx';
 import { LeaveGuard } from './leave-guard.tsx';
@@ -41,9 +43,10 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
   const save = useSaveRevision(id);
   const fetchLatest = useFetchLatest(id);
 
-  const form = useForm<StrapSpecInput, unknown, StrapSpec>({ resolver: zodResolver(StrapSpecSchema), mode: 'onChange', defaultValues: spec });
+  const form = useForm<StrapSpecInput, unknown, StrapSpec>({ resolver: specResolver, mode: 'onChange', defaultValues: spec });
   const values = useWatch({ control: form.control });
   const blocked = !StrapSpecSchema.safeParse(values).success;
+  const live = useLiveDraft(values, String(base.number));
 
   const onSave = async (note: string): Promise<boolean> => {
     setError(undefined);
@@ -62,12 +65,11 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
         const latest = await fetchLatest();
         setConflict({ number: latest.head.number, author: latest.head.author?.name ?? null, note: latest.head.note, detail: latest });
       } else {
-        // A refused spec value (e.g. `spec.sizes.2.girthMm`, a size the engine cannot draw) goes beside its field too.
+        // A refused spec value (e.g. a size too short for its tip holes) goes beside its field too.
         if (isApiError(err, 400)) {
           for (const [field, message] of Object.entries(err.fields ?? {})) {
-            // Beside the field its path is noise: "spec.sizes.3.girthMm: size L: ..." reads "size L: ...".
-            const text = message.startsWith(`${field}: `) ? message.slice(field.length + 2) : message;
-            if (field.startsWith('spec.')) form.setError(field.slice('spec.'.length) as FieldPath<StrapSpecInput>, { type: 'server', message: text });
+            // The server's messages already name the field by its label ("Size L (10 in): Tip holes: ...").
+            if (field.startsWith('spec.')) form.setError(field.slice('spec.'.length) as FieldPath<StrapSpecInput>, { type: 'server', message });
           }
         }
         setError(err instanceof Error ? err.message : 'The save did not go through.');
@@ -76,76 +78,94 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
     }
   };
 
+  const savePanel = canEdit && (
+    <Panel title="Save">
+      <SavePanel
+        dirty={form.formState.isDirty}
+        blocked={blocked}
+        saving={save.isPending}
+        baseNumber={base.number}
+        savedNumber={savedNumber}
+        error={error}
+        conflict={conflict}
+        onSave={onSave}
+        onKeepMine={() => {
+          if (!conflict) return;
+          setBase({ etag: conflict.detail.etag, number: conflict.number });
+          const head = conflict.detail.head.spec as StrapSpec;
+          setSavedSpec({ units: head.units, sizes: head.sizes ?? [] });
+          setConflict(null);
+        }}
+        onTakeTheirs={() => {
+          if (!conflict) return;
+          setBase({ etag: conflict.detail.etag, number: conflict.number });
+          const theirs = conflict.detail.head.spec as StrapSpec;
+          setSavedSpec({ units: theirs.units, sizes: theirs.sizes ?? [] });
+          form.reset(conflict.detail.head.spec as StrapSpecInput);
+          setConflict(null);
+        }}
+      />
+    </Panel>
+  );
+  const specForm = (
+    <form aria-label="Pattern spec" onSubmit={(e) => e.preventDefault()} noValidate>
+      <fieldset disabled={!canEdit} className="contents">
+        <SpecFields control={form.control} setValue={form.setValue} disabled={!canEdit} />
+      </fieldset>
+    </form>
+  );
+
   return (
-    <div className="grid items-start gap-6 lg:grid-cols-[minmax(320px,420px)_minmax(0,1fr)]">
+    <>
       <LeaveGuard dirty={canEdit && form.formState.isDirty} />
-      <div className="grid gap-4">
-        {!canEdit && (
-          <Notice tone="info" role="note">
-            Your role can read and print this pattern. A maker or the owner changes it.
-          </Notice>
-        )}
-        {canEdit && (
-          <div className="flex items-center justify-between gap-3 rounded-lg border border-dashed border-hide-300 px-4 py-2 text-sm text-hide-700">
-            <span>Start again from the shop&rsquo;s {kindLabel(detail.pattern.kind).toLowerCase()} preset?</span>
-            <Button
-              size="sm"
-              variant="ghost"
-              onClick={() => {
-                const preset = presetSpec(detail.pattern.kind);
-                // Keep the maker's name for the piece; everything else comes from the preset.
-                form.reset({ ...preset, name: form.getValues('name') ?? preset.name }, { keepDefaultValues: true });
-              }}
-            >
-              Load preset values
-            </Button>
-          </div>
-        )}
-        <form aria-label="Pattern spec" onSubmit={(e) => e.preventDefault()} noValidate>
-          <fieldset disabled={!canEdit} className="contents">
-            <SpecFields control={form.control} setValue={form.setValue} disabled={!canEdit} />
-          </fieldset>
-        </form>
-      </div>
-      <div className="grid grid-cols-[minmax(0,1fr)] gap-4">
-        <LivePreview values={values} revisionLabel={String(base.number)} />
-        <div className="grid items-start gap-4 xl:grid-cols-2">
-          <div className="grid gap-4">
-            {canEdit && (
-              <Panel title="Save">
-                <SavePanel
-                  dirty={form.formState.isDirty}
-                  blocked={blocked}
-                  saving={save.isPending}
-                  baseNumber={base.number}
-                  savedNumber={savedNumber}
-                  error={error}
-                  conflict={conflict}
-                  onSave={onSave}
-                  onKeepMine={() => {
-                    if (!conflict) return;
-                    setBase({ etag: conflict.detail.etag, number: conflict.number });
-                    const head = conflict.detail.head.spec as StrapSpec;
-                    setSavedSpec({ units: head.units, sizes: head.sizes ?? [] });
-                    setConflict(null);
+      <BenchLayout
+        readOnly={!canEdit}
+        bench={
+          <BenchCard
+            live={live}
+            actions={
+              <>
+                <a href="#print" className={buttonClass('primary', 'sm')} data-testid="bench-print">
+                  Print
+                </a>
+                <span className="text-xs text-hide-600" data-testid="bench-state">
+                  {!canEdit
+                    ? 'Your role can read and print this pattern. A maker or the owner changes it.'
+                    : form.formState.isDirty
+                      ? `Changed since revision ${base.number}, not saved`
+                      : `Revision ${base.number}`}
+                </span>
+              </>
+            }
+          />
+        }
+        form={
+          canEdit ? (
+            <>
+              <div className="flex items-center justify-between gap-3 rounded-lg border border-dashed border-hide-300 px-4 py-2 text-sm text-hide-700">
+                <span>Start again from the shop&rsquo;s {kindLabel(detail.pattern.kind).toLowerCase()} preset?</span>
+                <Button
+                  size="sm"
+                  variant="ghost"
+                  onClick={() => {
+                    const preset = presetSpec(detail.pattern.kind);
+                    // Keep the maker's name for the piece; everything else comes from the preset.
+                    form.reset({ ...preset, name: form.getValues('name') ?? preset.name }, { keepDefaultValues: true });
                   }}
-                  onTakeTheirs={() => {
-                    if (!conflict) return;
-                    setBase({ etag: conflict.detail.etag, number: conflict.number });
-                    const theirs = conflict.detail.head.spec as StrapSpec;
-                    setSavedSpec({ units: theirs.units, sizes: theirs.sizes ?? [] });
-                    form.reset(conflict.detail.head.spec as StrapSpecInput);
-                    setConflict(null);
-                  }}
-                />
-              </Panel>
-            )}
-            {canShare && (
-              <Panel title="Share read-only">
-                <SharePanel patternId={id} headNumber={base.number} />
-              </Panel>
-            )}
-          </div>
+                >
+                  Load preset values
+                </Button>
+              </div>
+              {specForm}
+            </>
+          ) : (
+            <details className="rounded-lg border border-hide-200 bg-white/70 px-4 py-3" data-testid="read-only-values">
+              <summary className="cursor-pointer text-sm font-semibold text-hide-900">All values of revision {base.number}</summary>
+              <div className="mt-3">{specForm}</div>
+            </details>
+          )
+        }
+        print={
           <Panel title="Print and download">
             <Downloads
               base={`/api/patterns/${id}/revisions/${base.number}`}
@@ -154,10 +174,24 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
               unit={savedSpec.units}
               sizes={savedSpec.sizes.map((s) => s.name)}
               dirty={form.formState.isDirty}
+              {...(canEdit ? { trial: { patternId: id, values: () => form.getValues(), sizes: (values.sizes ?? []).map((s) => s?.name ?? ''), blocked } } : {})}
             />
           </Panel>
-        </div>
-      </div>
-    </div>
+        }
+        actions={
+          (savePanel || canShare) && (
+            <>
+              {savePanel}
+              {canShare && (
+                <Panel title="Share read-only">
+                  <SharePanel patternId={id} headNumber={base.number} />
+                </Panel>
+              )}
+            </>
+          )
+        }
+        details={<PreviewDetails live={live} />}
+      />
+    </>
   );
 }

@@ -26,6 +26,8 @@ export interface PrintChoice {
   jobSheet: boolean;
   /** A size name, "all", or "" for the pattern's own girth (no run). */
   size: string;
+  /** A customer's girth as typed (display unit); when set it replaces the size. */
+  girth?: string;
 }
 
 export interface PrintOptionsProps {
@@ -36,10 +38,12 @@ export interface PrintOptionsProps {
   /** The server's refusals, keyed by option. */
   errors: FieldErrors;
   disabled?: boolean;
+  /** Offer "Customer girth": the saved pattern fitted to one girth for this print. */
+  customerGirth?: boolean;
 }
 
 /** Paper, orientation, margin, tile overlap, job sheet and (for a run) which size to print. */
-export function PrintOptions({ value, onChange, unit, sizes, errors, disabled }: PrintOptionsProps) {
+export function PrintOptions({ value, onChange, unit, sizes, errors, disabled, customerGirth }: PrintOptionsProps) {
   const set = <K extends keyof PrintChoice>(key: K, v: PrintChoice[K]) => onChange({ ...value, [key]: v });
   return (
     <div className="grid grid-cols-2 gap-x-3 gap-y-3">
@@ -57,8 +61,30 @@ export function PrintOptions({ value, onChange, unit, sizes, errors, disabled }:
           </option>
         ))}
       </SelectField>
+      {customerGirth && value.girth === undefined && (
+        <div className="col-span-2">
+          <button type="button" className="text-sm font-medium text-hide-800 underline underline-offset-2" disabled={disabled} onClick={() => set('girth', '')}>
+            Print at a customer&rsquo;s girth…
+          </button>
+        </div>
+      )}
+      {customerGirth && value.girth !== undefined && (
+        <TextField
+          label="Customer girth"
+          unit={unit}
+          value={value.girth ?? ''}
+          error={errors.girth}
+          placeholder={sizes.length > 0 ? 'a size of the run' : 'the pattern’s own'}
+          hint="Prints the saved pattern fitted to this girth; the pattern is not changed."
+          inputMode="decimal"
+          autoComplete="off"
+          disabled={disabled}
+          onChange={(e) => set('girth', e.target.value)}
+          wrapperClassName="col-span-2"
+        />
+      )}
       {sizes.length > 0 && (
-        <SelectField label="Size" value={value.size} error={errors.size} disabled={disabled} onChange={(e) => set('size', e.target.value)}>
+        <SelectField label="Size" value={value.size} error={errors.size} disabled={disabled || Boolean(value.girth?.trim())} onChange={(e) => set('size', e.target.value)}>
           <option value="all">All {sizes.length} sizes</option>
           {sizes.map((s) => (
             <option key={s} value={s}>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { lengthOption, optionsBody, toQuery } from './print-query.ts';
+import { lengthOption, optionsBody, toQuery, trialOptionsBody } from './print-query.ts';
 
 const choice = { paper: 'a4', orientation: 'landscape', margin: '', overlap: '', jobSheet: false, size: 'all' };
 
@@ -21,5 +21,14 @@ describe('print options as the server reads them', () => {
 
   it('when the options become a query, then every value is URL-encoded text (WHATWG URLSearchParams)', () => {
     expect(toQuery({ paper: 'letter', size: 'X & L', jobSheet: true })).toBe('paper=letter&size=X+%26+L&jobSheet=true');
+  });
+
+  it('when a customer girth of 14 1/2 in is typed, then 368.3mm is sent instead of the size (1 in = 25.4 mm, 1959 agreement)', () => {
+    expect(optionsBody({ ...choice, size: 'M', girth: '14 1/2' }, 'in', true)).toEqual({ paper: 'a4', orientation: 'landscape', jobSheet: false, girth: '368.3mm' });
+  });
+
+  it('when a trial print is asked for, then the customer girth is left out and the size comes from the form run', () => {
+    expect(trialOptionsBody({ ...choice, size: 'XL', girth: '14' }, 'in', ['S', 'M'])).toEqual({ paper: 'a4', orientation: 'landscape', jobSheet: false, size: 'all' });
+    expect(trialOptionsBody({ ...choice, girth: '14' }, 'in', [])).toEqual({ paper: 'a4', orientation: 'landscape', jobSheet: false });
   });
 });

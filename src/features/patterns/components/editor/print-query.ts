@@ -11,18 +11,28 @@ export function lengthOption(text: string, unit: LengthUnit): string | undefined
   return Number.isFinite(mm) ? `${Math.round(mm * 1000) / 1000}mm` : text.trim();
 }
 
-/** The options the server reads, from what the panel holds (the size only when there is a run). */
+/**
+ * The options the server reads, from what the panel holds: the size only when there is a run,
+ * and a customer girth instead of the size when one is typed (the saved pattern fitted to it).
+ */
 export function optionsBody(c: PrintChoice, unit: LengthUnit, hasSizes: boolean): PrintOptionsBody {
   const margin = lengthOption(c.margin, unit);
   const overlap = lengthOption(c.overlap, unit);
+  const girth = lengthOption(c.girth ?? '', unit);
   return {
     paper: c.paper,
     orientation: c.orientation,
     ...(margin !== undefined ? { margin } : {}),
     ...(overlap !== undefined ? { overlap } : {}),
     jobSheet: c.jobSheet,
-    ...(hasSizes && c.size ? { size: c.size } : {}),
+    ...(girth !== undefined ? { girth } : hasSizes && c.size ? { size: c.size } : {}),
   };
+}
+
+/** The same options for a trial print of the form's values: its own girth and run, no customer girth. */
+export function trialOptionsBody(c: PrintChoice, unit: LengthUnit, formSizes: readonly string[]): PrintOptionsBody {
+  const size = formSizes.includes(c.size) ? c.size : formSizes.length > 0 ? 'all' : '';
+  return optionsBody({ ...c, girth: '', size }, unit, formSizes.length > 0);
 }
 
 /** The same options as a query string for the synchronous download. */
