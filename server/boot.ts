@@ -8,6 +8,7 @@ import { listen, stopOnSignals, type RunningServer } from './index.ts';
 import { dirname, join } from 'node:path';
 import { DEMO_PASSWORD, DEMO_USERS, seed as seedShop } from '../db/seeds/01-demo-shop.ts';
 import { seed as seedPatterns } from '../db/seeds/02-demo-patterns.ts';
+import { seed as seedOrders } from '../db/seeds/03-demo-orders.ts';
 import type { AppDeps } from './app.ts';
 import { startFakeSmtp } from './modules/mail/fake-smtp.ts';
 import { smtpTransport } from './modules/mail/outbox.ts';
@@ -23,6 +24,7 @@ export async function prepareDatabase(config: Config): Promise<Knex> {
   if (config.env !== 'production') {
     await seedShop(db);
     await seedPatterns(db);
+    await seedOrders(db);
   }
   return db;
 }

@@ -19,7 +19,7 @@ export const customerView = (r: CustomerRow): CustomerView => ({
 export const measurementView = (r: MeasurementRow): MeasurementView => ({
   id: r.id,
   wearerId: r.wearer_id,
-  girthMm: Number(r.girth_mm),
+  girthMm: Math.round(Number(r.girth_mm) * 1000) / 1000,
   unit: r.unit as GirthUnit,
   part: r.part as BodyPart,
   method: r.method as MeasureMethod,

@@ -28,6 +28,9 @@ export async function priceContext(db: Knex, shopId: number): Promise<PriceConte
   return { pricing, hardwareItems };
 }
 
+/** Lengths to the micrometre, so 12 x 25.4 reads 304.8 wherever people see it. */
+export const roundMm = (mm: number) => Math.round(mm * 1000) / 1000;
+
 export const specOf = (row: ListedOrderRow) => JSON.parse(row.spec) as StrapSpec;
 
 /** The order's revision fitted to its girth, or null while it waits for one. */
@@ -76,7 +79,7 @@ export function summaryOf(row: ListedOrderRow, ctx: PriceContext, nowMs: number,
     wearer: { id: row.wearer_id, name: row.wearer_name, kind: row.wearer_kind as WearerKind },
     pattern: { id: row.pattern_id, name: row.pattern_name, kind: row.pattern_kind as PresetName },
     revision: row.revision_number,
-    girthMm: row.girth_mm === null ? null : Number(row.girth_mm),
+    girthMm: row.girth_mm === null ? null : roundMm(Number(row.girth_mm)),
     sizeName: row.size_name,
     unit: spec.units,
     dueDate: row.due_date,

@@ -13,7 +13,7 @@ import { newToken, plausibleToken, tokenHash } from '../invites/tokens.ts';
 import { shopRecipients } from '../measure-links/measure-links.repository.ts';
 import { proofAnsweredMail } from '../orders/order-mails.ts';
 import { fittedLengths } from '../orders/order-fit.ts';
-import { fittedOf, priceContext, priceOf } from '../orders/order-view.ts';
+import { fittedOf, priceContext, priceOf, roundMm } from '../orders/order-view.ts';
 import { createOrdersRepository, type ListedOrderRow } from '../orders/orders.repository.ts';
 import type { OrdersDeps } from '../orders/orders.service.ts';
 import { idParam } from '../patterns/pattern-access.ts';
@@ -97,7 +97,7 @@ export function createProofsService(deps: OrdersDeps, orderOr404: (shopId: numbe
         unit: fitted?.spec.units ?? 'in',
         drawingSvg: fitted ? proofSvg(fitted.layout, fitted.spec) : '',
         finishedLengthMm: lengths?.finishedLengthMm ?? null,
-        girthMm: order.girth_mm === null ? null : Number(order.girth_mm),
+        girthMm: order.girth_mm === null ? null : roundMm(Number(order.girth_mm)),
         fitRangeMm: lengths?.fitRangeMm ?? null,
         leatherColour: order.leather_colour,
         leatherFinish: order.leather_finish,
