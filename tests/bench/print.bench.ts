@@ -1,7 +1,8 @@
 // Print benchmark (`npm run bench print`): our pdfkit template PDF for the 21 in collar on
-// Letter and for a five-size collar run, against printing the same full-size SVG from
-// headless Chromium (page.pdf at scale 1) in the same run, as a ratio. It also measures a
-// 1 in check square in Chromium's PDF at 1200 dpi to report whether Chromium kept 1:1.
+// Letter and for five- and twelve-size collar runs, against printing the same full-size SVG
+// from headless Chromium (page.pdf at scale 1) in the same run, as a ratio. It also measures a
+// 1 in check square in Chromium's PDF at 1200 dpi to report whether Chromium kept 1:1, and
+// checks that printing the same input twice gives the same bytes.
 import { execFileSync } from 'node:child_process';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
@@ -11,24 +12,13 @@ import type { Drawing, DrawingPiece } from '@shared/render/drawing.ts';
 import { buildFullSizeSvg, printRevisionInline, type RevisionMeta } from '../../server/modules/print/index.ts';
 import { revisionDrawing } from '../../server/modules/print/revision-drawing.ts';
 import { darkSpan, parsePgm } from '../print/pdf-tools.ts';
+import { medianMs, verdict } from './measure.ts';
 
 const OUT = join(process.cwd(), 'test-output', 'print', 'bench');
 mkdirSync(OUT, { recursive: true });
-const RUNS = 7;
-
-/** Median wall time of `fn` in ms over RUNS runs after one warm-up. */
-async function medianMs(fn: () => Promise<unknown>): Promise<number> {
-  await fn();
-  const t: number[] = [];
-  for (let i = 0; i < RUNS; i++) {
-    (globalThis as { gc?: () => void }).gc?.();
-    const s = performance.now();
-    await fn();
-    t.push(performance.now() - s);
-  }
-  t.sort((a, b) => a - b);
-  return t[Math.floor(t.length / 2)] ?? NaN;
-}
+const RUNS = 9;
+/** How many times faster than Chromium each case must be (issue 10). */
+const TARGET_X = { single: 5, run: 3 };
 
 // A 1 in check square as the first piece: renderSvg places it at the sheet's 5 mm margin.
 const SQUARE: DrawingPiece = {
@@ -40,23 +30,28 @@ const SQUARE: DrawingPiece = {
   items: [{ type: 'path', layer: 'cut', commands: [{ op: 'M', x: 0, y: 0 }, { op: 'L', x: 25.4, y: 0 }, { op: 'L', x: 25.4, y: 25.4 }, { op: 'L', x: 0, y: 25.4 }, { op: 'Z' }] }],
 };
 
-const RUN = [
+const RUN5 = [
   { name: 'XS', girthMm: 254 },
   { name: 'S', girthMm: 304.8 },
   { name: 'M', girthMm: 355.6 },
   { name: 'L', girthMm: 406.4 },
   { name: 'XL', girthMm: 457.2 },
 ];
-const META: RevisionMeta = { patternName: 'Collar for Juniper', revision: 1, date: '2026-12-01', sizes: RUN };
+// Twelve sizes, 9 in to 20 in neck, 1 in apart.
+const RUN12 = Array.from({ length: 12 }, (_, i) => ({ name: `N${i + 9}`, girthMm: 228.6 + i * 25.4 }));
+const meta = (sizes?: typeof RUN5): RevisionMeta => ({ patternName: 'Collar for Juniper', revision: 1, date: '2026-12-01', ...(sizes ? { sizes } : {}) });
 
 interface Case {
   name: string;
   spec: StrapSpec;
+  meta: RevisionMeta;
   size?: string;
+  targetX: number;
 }
 const CASES: Case[] = [
-  { name: '21 in collar, Letter', spec: presetSpec('collar') },
-  { name: 'five-size run, Letter', spec: presetSpec('collar'), size: 'all' },
+  { name: '21 in collar, Letter', spec: presetSpec('collar'), meta: meta(), targetX: TARGET_X.single },
+  { name: 'five-size run, Letter', spec: presetSpec('collar'), meta: meta(RUN5), size: 'all', targetX: TARGET_X.run },
+  { name: '12-size run, Letter', spec: presetSpec('collar'), meta: meta(RUN12), size: 'all', targetX: TARGET_X.run },
 ];
 
 /** Side of the check square in Chromium's PDF, mm, read between the stroke centres at 1200 dpi. */
@@ -82,13 +77,14 @@ const browser = await chromium.launch({
 });
 try {
   const page = await browser.newPage();
-  console.log('case                    ours ms   chromium ms   ours/chromium   ours pages   chromium 1 in square');
+  console.log('case                    ours ms   chromium ms   ours/chromium   x faster (target)   ours pages   same bytes   chromium 1 in square');
   for (const c of CASES) {
     const opts = { paper: 'letter' as const, ...(c.size ? { size: c.size } : {}) };
-    const ours = await printRevisionInline(c.spec, opts, META);
+    const ours = await printRevisionInline(c.spec, opts, c.meta);
+    const again = await printRevisionInline(c.spec, opts, c.meta);
     writeFileSync(join(OUT, `${c.name.replace(/\W+/g, '-')}-ours.pdf`), ours.body);
-    const oursMs = await medianMs(() => printRevisionInline(c.spec, opts, META));
-    const { drawing } = revisionDrawing(c.spec, opts, META);
+    const oursMs = await medianMs(() => printRevisionInline(c.spec, opts, c.meta), RUNS);
+    const { drawing } = revisionDrawing(c.spec, opts, c.meta);
     const withSquare: Drawing = { ...drawing, pieces: [SQUARE, ...drawing.pieces] };
     const svg = buildFullSizeSvg(withSquare);
     const w = /width="([\d.]+)mm"/.exec(svg)?.[1];
@@ -101,15 +97,16 @@ try {
     const chromePdf = await viaChromium();
     const chromePath = join(OUT, `${c.name.replace(/\W+/g, '-')}-chromium.pdf`);
     writeFileSync(chromePath, chromePdf);
-    const chromeMs = await medianMs(viaChromium);
+    const chromeMs = await medianMs(viaChromium, RUNS);
     const side = squareSideMm(chromePath);
     const pages = (ours.body.toString('latin1').match(/\/Type \/Page\b/g) ?? []).length;
     const keeps = Math.abs(side - 25.4) / 25.4 < 0.001 ? 'kept 1:1' : 'NOT 1:1';
+    const faster = chromeMs / oursMs;
     console.log(
-      `${c.name.padEnd(22)} ${oursMs.toFixed(1).padStart(8)}   ${chromeMs.toFixed(1).padStart(11)}   ${(oursMs / chromeMs).toFixed(3).padStart(13)}   ${String(pages).padStart(10)}   ${side.toFixed(3)} mm (${(((side - 25.4) / 25.4) * 100).toFixed(3)} %) ${keeps}`,
+      `${c.name.padEnd(22)} ${oursMs.toFixed(1).padStart(8)}   ${chromeMs.toFixed(1).padStart(11)}   ${(oursMs / chromeMs).toFixed(3).padStart(13)}   ${`${faster.toFixed(2)} (${c.targetX}) ${verdict(faster >= c.targetX)}`.padStart(17)}   ${String(pages).padStart(10)}   ${(ours.body.equals(again.body) ? 'yes' : 'NO').padStart(10)}   ${side.toFixed(3)} mm (${(((side - 25.4) / 25.4) * 100).toFixed(3)} %) ${keeps}`,
     );
   }
-  console.log(`\nmedian of ${RUNS} runs after a warm-up; Chromium writes one sheet the size of the SVG (no tiling, no page furniture).`);
+  console.log(`\nmedian wall time of ${RUNS} runs after two warm-ups; Chromium writes one sheet the size of the SVG (no tiling, no page furniture).`);
 } finally {
   await browser.close();
 }
