@@ -162,3 +162,16 @@ describe('proof link', () => {
     await request(t.app).get(`/api/proof/${token}`).expect(404);
   });
 });
+
+describe('measuring link after cutting', () => {
+  it('when the customer answers after the leather is cut, then the wearer gets the measurement but the order keeps its girth and the history says to check', async () => {
+    const { order } = await makeOrder(t, w);
+    const { token } = await measureToken(t, order.id, w.apprentice);
+    await request(t.app).post(`/api/orders/${order.id}/stage`).set('Cookie', w.apprentice.cookie).send({ stage: 'cut' }).expect(200);
+    await request(t.app).post(`/api/measure/${token}`).send({ unit: 'cm', girthMm: 380, confirmGirthMm: 380 }).expect(201);
+    const o = (await request(t.app).get(`/api/orders/${order.id}`).set('Cookie', w.maker.cookie)).body.order as OrderDetail;
+    expect(o.girthMm).toBe(355.6);
+    expect(o.stage).toBe('cut');
+    expect(o.history[0]!.summary).toMatch(/38 cm .*at Cut already, so its girth stays as it was: check with the customer\.$/);
+  });
+});

@@ -118,9 +118,12 @@ export function createMeasureLinksService(deps: OrdersDeps, orderOr404: (shopId:
           created_at: t,
         });
         if ((await links.markAnswered(trx, link.id, measurementId, t)) !== 1) throw new HttpError(410, 'link_used', 'This measuring link has been used already.');
+        // Leather already cut keeps its girth: the answer is kept on the wearer and the history says so.
+        const fills = fresh.stage === 'waiting-for-measurement' || fresh.stage === 'ready-to-cut';
         const stage = fresh.stage === 'waiting-for-measurement' ? 'ready-to-cut' : fresh.stage;
-        await orders.update(trx, fresh.id, { fit_from: 'measurement', size_name: null, measurement_id: measurementId, girth_mm: girthMm, stage, updated_at: t });
-        await orders.record(trx, { order_id: fresh.id, user_id: null, by_label: `${fresh.customer_name} (measuring link)`, kind: 'measured', summary: `${fresh.customer_name} measured ${fresh.wearer_name}: ${girthText} (readings ${formatGirth(input.girthMm, input.unit)} and ${formatGirth(input.confirmGirthMm, input.unit)}).`, at: t });
+        if (fills) await orders.update(trx, fresh.id, { fit_from: 'measurement', size_name: null, measurement_id: measurementId, girth_mm: girthMm, stage, updated_at: t });
+        const kept = fills ? '' : ` The order is at ${stageLabel(fresh.stage)} already, so its girth stays as it was: check with the customer.`;
+        await orders.record(trx, { order_id: fresh.id, user_id: null, by_label: `${fresh.customer_name} (measuring link)`, kind: 'measured', summary: `${fresh.customer_name} measured ${fresh.wearer_name}: ${girthText} (readings ${formatGirth(input.girthMm, input.unit)} and ${formatGirth(input.confirmGirthMm, input.unit)}).${kept}`, at: t });
         if (stage !== fresh.stage) {
           await orders.record(trx, { order_id: fresh.id, user_id: null, by_label: 'Latchet', kind: 'stage', from_stage: fresh.stage, to_stage: stage, summary: `Moved from ${stageLabel(fresh.stage)} to ${stageLabel(stage)} with the customer's measurement.`, at: t });
         }

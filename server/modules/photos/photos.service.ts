@@ -51,9 +51,9 @@ export function createPhotosService(deps: OrdersDeps & { fileStore: FileStore },
       const name = randomBytes(16).toString('hex');
       const key = `photos/${auth.shop.id}/${name}.${checked.ext}`;
       const thumbKey = `photos/${auth.shop.id}/${name}-thumb.jpg`;
-      await fileStore.put(key, checked.body, checked.contentType);
-      await fileStore.put(thumbKey, checked.thumb, 'image/jpeg');
       try {
+        await fileStore.put(key, checked.body, checked.contentType);
+        await fileStore.put(thumbKey, checked.thumb, 'image/jpeg');
         const id = await writeTransaction(db, async (trx) => {
           const t = now();
           const photoId = await photos.insert(trx, {
@@ -76,7 +76,7 @@ export function createPhotosService(deps: OrdersDeps & { fileStore: FileStore },
         });
         return { photo: photoView((await photos.one(owner, id))!) };
       } catch (err) {
-        // Nothing stays behind when the row could not be written.
+        // Nothing stays behind when a file or the row could not be written.
         await fileStore.delete(key).catch(() => undefined);
         await fileStore.delete(thumbKey).catch(() => undefined);
         throw err;
