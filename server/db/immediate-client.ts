@@ -16,8 +16,17 @@ const ClientBetterSqlite3 = require('knex/lib/dialects/better-sqlite3/index.js')
 const TransactionSqlite = require('knex/lib/dialects/sqlite3/execution/sqlite-transaction.js') as AnyClass;
 
 class ImmediateTransaction extends TransactionSqlite {
-  begin(conn: unknown) {
+  begin(conn: { inTransaction?: boolean } | undefined) {
     return this.query(conn, 'BEGIN IMMEDIATE;');
+  }
+
+  // SQLite ends a transaction by itself after some errors (SQLITE_FULL, SQLITE_IOERR,
+  // SQLITE_NOMEM: "Response To Errors Within A Transaction" in its docs). Knex's ROLLBACK then
+  // fails with "no transaction is active" and that error replaces the real one, so a full
+  // disk would look like a bug. When better-sqlite3 says no transaction is open, send a no-op.
+  query(conn: { inTransaction?: boolean } | undefined, sql: string, status?: number, value?: unknown) {
+    const alreadyEnded = /^ROLLBACK/i.test(sql) && conn?.inTransaction === false;
+    return super.query(conn, alreadyEnded ? 'SELECT 1' : sql, status, value);
   }
 }
 

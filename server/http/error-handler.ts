@@ -2,6 +2,7 @@
 // 500 whose details go to the log only, never to the client.
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { HttpError } from './http-error.ts';
+import { storageFullError } from './storage-full.ts';
 
 interface BodyParserError {
   type?: string;
@@ -30,7 +31,7 @@ export function errorHandler(log: (err: unknown) => void = (e) => console.error(
     if (res.headersSent) return next(err);
     const known = toHttpError(err);
     if (!known) log(err);
-    const e = known ?? new HttpError(500, 'internal', 'Something went wrong on the server; nothing was saved by this request.');
+    const e = known ?? storageFullError(err) ?? new HttpError(500, 'internal', 'Something went wrong on the server; nothing was saved by this request.');
     for (const [name, value] of Object.entries(e.headers ?? {})) res.setHeader(name, value);
     res.status(e.status).json({ error: { code: e.code, message: e.message, ...(e.fields ? { fields: e.fields } : {}), ...e.details } });
   };
