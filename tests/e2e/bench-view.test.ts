@@ -115,6 +115,25 @@ describe('the bench view', () => {
     expect(text).toMatch(/rev 1 · at 14 1\/2 in girth/);
   });
 
+  it('when a maker scrolls down the form on a tablet and a phone, then the drawing and summary stay at the top of the screen', async () => {
+    await signInAs(people.maker.email, PASSWORD);
+    for (const [name, size] of [['tablet', SIZES.tablet], ['phone', SIZES.phone]] as const) {
+      await page.setViewportSize(size);
+      await openPattern();
+      // The save note sits below the whole form, far below the first screen.
+      await page.getByLabel('Note for this revision').scrollIntoViewIfNeeded();
+      await page.evaluate(() => window.scrollBy(0, -200));
+      // Read in the page itself: the top of the bench card against the window while scrolled.
+      await expect.poll(() => page.evaluate(() => window.scrollY), name).toBeGreaterThan(1000);
+      const top = await page.getByTestId('bench-card').evaluate((el) => el.getBoundingClientRect().top);
+      expect(top, name).toBeGreaterThanOrEqual(0);
+      expect(top, name).toBeLessThan(16);
+      expect(await page.getByTestId('bench-summary').isVisible()).toBe(true);
+      await page.screenshot({ path: join(outDir, `bench-maker-${name}-form-scrolled.png`) });
+    }
+    await page.setViewportSize(SIZES.desktop);
+  });
+
   it('when the screen is calibrated with a card, then true size draws 25.4 mm as 25.4 x the stored px per mm', async () => {
     await page.setViewportSize(SIZES.desktop);
     await openPattern();

@@ -18,7 +18,7 @@ export function BenchCard({ live, actions }: BenchCardProps) {
   const { draft, lastSvg } = live;
   const [open, setOpen] = useState(true);
   return (
-    <section aria-label="Preview" className="grid min-w-0 gap-2 rounded-lg border border-hide-200 bg-white/95 p-3 shadow-md shadow-hide-900/10 backdrop-blur sm:p-4" data-testid="bench-card">
+    <section aria-label="Preview" className="grid min-w-0 gap-2 rounded-lg border border-hide-200 bg-white p-3 shadow-md shadow-hide-900/10 sm:p-4" data-testid="bench-card">
       <header className="flex items-center justify-between gap-3">
         <h2 className="text-[0.95rem] font-semibold text-hide-900">Preview</h2>
         <button type="button" className="text-xs font-medium text-hide-700 underline underline-offset-2 lg:hidden" aria-expanded={open} onClick={() => setOpen((o) => !o)}>

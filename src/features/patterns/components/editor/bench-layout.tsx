@@ -44,7 +44,7 @@ export function BenchLayout({ bench, form, print, actions, details, readOnly }: 
   return (
     <div style={style} className="flex min-w-0 flex-col gap-4 lg:grid lg:grid-cols-[minmax(320px,420px)_minmax(0,1fr)] lg:gap-6" data-testid="bench-layout">
       <div className="contents lg:col-start-2 lg:row-start-1 lg:flex lg:min-w-0 lg:flex-col lg:gap-4">
-        <div ref={benchRef} className="sticky top-0 z-20 order-1 min-w-0 pt-1 lg:top-2">
+        <div ref={benchRef} className="sticky top-0 z-20 order-1 -mx-1 min-w-0 bg-paper px-1 py-1 lg:top-0 lg:pt-2">
           {bench}
         </div>
         {readOnly && printPanel('order-2')}

@@ -173,7 +173,7 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
               revisionNumber={base.number}
               unit={savedSpec.units}
               sizes={savedSpec.sizes.map((s) => s.name)}
-              dirty={form.formState.isDirty}
+              dirty={canEdit && form.formState.isDirty}
               {...(canEdit ? { trial: { patternId: id, values: () => form.getValues(), sizes: (values.sizes ?? []).map((s) => s?.name ?? ''), blocked } } : {})}
             />
           </Panel>
