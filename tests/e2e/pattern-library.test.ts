@@ -126,8 +126,12 @@ describe('the pattern library in the browser', () => {
     await expect.poll(() => blankText(page)).toBe('23 in');
   });
 
-  it('when the preset values are loaded and the owner tries to leave, then the form is back at 13 in and leaving asks first', async () => {
-    await page.getByRole('button', { name: 'Load preset values' }).click();
+  it('when the built-in preset is loaded over an edited form, then it asks first, the form is back at 13 in and leaving asks first', async () => {
+    await page.getByLabel('Girth').fill('16');
+    await expect.poll(() => blankText(page)).toBe('24 in');
+    await page.getByRole('button', { name: 'Built-in preset' }).click();
+    await page.getByRole('alertdialog', { name: "Replace the form's values?" }).waitFor();
+    await page.getByRole('button', { name: 'Replace the values' }).click();
     await expect.poll(() => page.getByLabel('Girth').inputValue()).toBe('13');
     await expect.poll(() => blankText(page)).toBe('21 in');
     await page.getByRole('link', { name: 'Library' }).click();

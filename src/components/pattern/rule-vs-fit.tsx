@@ -14,13 +14,13 @@ function Column({ title, active, blankMm, nominalAtMm, innerMm, unit }: { title:
         <dd className="font-semibold">{formatLength(blankMm, unit)}</dd>
         {nominalAtMm !== undefined && (
           <>
-            <dt className="text-hide-600">Nominal hole</dt>
+            <dt className="text-hide-600">Middle hole at</dt>
             <dd>{formatLength(nominalAtMm, unit)}</dd>
           </>
         )}
         {innerMm !== undefined && (
           <>
-            <dt className="text-hide-600">Inside at it</dt>
+            <dt className="text-hide-600">Inside there</dt>
             <dd>{formatLength(innerMm, unit)}</dd>
           </>
         )}
@@ -29,7 +29,7 @@ function Column({ title, active, blankMm, nominalAtMm, innerMm, unit }: { title:
   );
 }
 
-/** The shop's rule of thumb beside the fitted length, so a maker sees what the rule costs. */
+/** The shop's rule of thumb beside the length fitted to girth + ease, so a maker sees what the rule gives. */
 export function RuleVsFitPanel({ value, mode, unit }: { value: RuleVsFit; mode: 'rule' | 'fit'; unit: LengthUnit }) {
   return (
     <div data-testid="rule-vs-fit">
@@ -37,6 +37,7 @@ export function RuleVsFitPanel({ value, mode, unit }: { value: RuleVsFit; mode: 
         <Column title="Rule" active={mode === 'rule'} blankMm={value.rule.blankLengthMm} nominalAtMm={value.rule.nominalAtMm} innerMm={value.rule.nominalInnerMm} unit={unit} />
         <Column title="Fit" active={mode === 'fit'} blankMm={value.fit.blankLengthMm} nominalAtMm={value.fit.nominalAtMm} innerMm={value.fit.nominalInnerMm} unit={unit} />
       </div>
+      <p className="mt-2 text-xs text-hide-600">Rule: the shop&rsquo;s rule of thumb (girth + allowance). Fit: holes placed so the middle one closes on girth + ease.</p>
       <p className="mt-2 text-sm text-hide-700">{value.summary}</p>
     </div>
   );

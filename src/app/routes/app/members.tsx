@@ -8,6 +8,7 @@ import { InviteForm } from '@/features/shop/components/invite-form.tsx';
 import { OpenInvites } from '@/features/shop/components/open-invites.tsx';
 import { Panel } from '@/components/ui/panel.tsx';
 import { NotificationSetting } from '@/features/settings/components/notification-setting.tsx';
+import { ShopNav } from './shop-nav.tsx';
 
 export const clientLoader = (queryClient: QueryClient): LoaderFunction => async () => {
   const me = await queryClient.ensureQueryData(meQueryOptions());
@@ -29,10 +30,13 @@ export function Component() {
   if (!me) return null;
   return (
     <div className="grid max-w-5xl gap-6">
-      <div>
-        <p className="text-sm font-medium uppercase tracking-widest text-hide-500">{me.shop.name}</p>
-        <h1 className="mt-1 text-3xl font-semibold tracking-tight text-hide-900">People in the shop</h1>
-        <p className="mt-1 text-hide-700">Owners run the shop; makers draft and save; apprentices read the library and print.</p>
+      <div className="grid gap-3">
+        <div>
+          <p className="text-sm font-medium uppercase tracking-widest text-hide-500">{me.shop.name}</p>
+          <h1 className="mt-1 text-3xl font-semibold tracking-tight text-hide-900">People in the shop</h1>
+          <p className="mt-1 text-hide-700">Owners run the shop; makers draft and save; apprentices read the library and print.</p>
+        </div>
+        <ShopNav />
       </div>
       <Panel title="Your mail">
         <NotificationSetting />

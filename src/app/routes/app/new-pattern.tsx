@@ -17,7 +17,9 @@ export function Component() {
     <div className="grid max-w-5xl gap-6">
       <div>
         <h1 className="text-3xl font-semibold tracking-tight text-hide-900">New pattern</h1>
-        <p className="mt-1 text-hide-700">Every preset holds the shop&rsquo;s usual practice; change any value in the editor next.</p>
+        <p className="mt-1 text-hide-700">
+          Each kind starts from the shop&rsquo;s standard (set by an owner under Shop, Standards); change any value in the editor next.
+        </p>
       </div>
       <NewPatternForm initialKind={kind} onCreated={(id) => navigate(paths.patterns.detail.getHref(id))} />
     </div>

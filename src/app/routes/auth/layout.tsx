@@ -24,7 +24,7 @@ export function Component() {
         <div>
           <TemplateSketch className="w-full max-w-md text-hide-300" />
           <p className="mt-10 max-w-sm text-2xl leading-snug font-medium text-paper">
-            Measure once. Draft the blank, the fold and every hole from one datum, and print it true to scale.
+            Measure once. Draft the blank, the fold and every hole measured from the buckle end, and print it true to scale.
           </p>
           <p className="mt-4 max-w-sm text-sm text-hide-300">
             For shops that make collars, belts, watch straps and bag straps to measure, and hand proven

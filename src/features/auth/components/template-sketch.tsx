@@ -19,7 +19,7 @@ export function TemplateSketch({ className }: { className?: string }) {
       <path d="M12 100v10M268 100v10M12 105h256" strokeWidth="0.9" />
       <path d="M262 102l6 3-6 3" strokeWidth="0.9" />
       <text x="140" y="100" fontSize="9" fill="currentColor" stroke="none" textAnchor="middle" fontFamily="inherit">
-        datum to middle hole
+        buckle end to middle hole
       </text>
       <text x="64" y="28" fontSize="9" fill="currentColor" stroke="none" textAnchor="middle" fontFamily="inherit">
         fold

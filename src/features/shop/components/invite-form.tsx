@@ -8,6 +8,7 @@ import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { useCreateInvite } from '../api/mutations.ts';
 import { ROLE_OPTIONS } from './role-options.ts';
+import { formatWhen } from '@/lib/format-when.ts';
 
 /** Invite someone by e-mail with a role; the server sends the message with a one-time link. */
 export function InviteForm() {
@@ -22,7 +23,7 @@ export function InviteForm() {
     setResult(undefined);
     try {
       const sent = await create.mutateAsync(v);
-      setResult({ tone: 'success', text: `Invite sent to ${sent.invite.email} as ${sent.invite.role}. The link works once and runs out on ${new Date(sent.invite.expiresAt).toLocaleDateString()}.` });
+      setResult({ tone: 'success', text: `Invite sent to ${sent.invite.email} as ${sent.invite.role}. The link works once and runs out ${formatWhen(sent.invite.expiresAt)}.` });
       reset({ email: '', role: v.role });
     } catch (err) {
       const rest = applyServerErrors(err, setError, ['email', 'role']);

@@ -5,11 +5,11 @@ import { isApiError } from '@/lib/api-client.ts';
 import { specResolver } from '@/lib/spec-resolver.ts';
 import { kindLabel } from '../../kinds.ts';
 import { Panel } from '@/components/ui/panel.tsx';
-import { Button, buttonClass } from '@/components/ui/button.tsx';
+import { buttonClass } from '@/components/ui/button.tsx';
 import { useFetchLatest, useSaveRevision } from '../../api/mutations.ts';
 import type { PatternDetail } from '../../api/queries.ts';
 import { SpecFields } from '../spec-form/spec-fields.tsx';
-import { presetSpec } from '@shared/pattern/presets/index.ts';
+import { StartValuesBar } from '../spec-form/start-values-bar.tsx';
 import { Downloads } from './downloads.tsx';
 import { PreviewDetails } from './live-preview.tsx';
 import { BenchCard } from './bench-card.tsx';
@@ -142,20 +142,13 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
         form={
           canEdit ? (
             <>
-              <div className="flex items-center justify-between gap-3 rounded-lg border border-dashed border-hide-300 px-4 py-2 text-sm text-hide-700">
-                <span>Start again from the shop&rsquo;s {kindLabel(detail.pattern.kind).toLowerCase()} preset?</span>
-                <Button
-                  size="sm"
-                  variant="ghost"
-                  onClick={() => {
-                    const preset = presetSpec(detail.pattern.kind);
-                    // Keep the maker's name for the piece; everything else comes from the preset.
-                    form.reset({ ...preset, name: form.getValues('name') ?? preset.name }, { keepDefaultValues: true });
-                  }}
-                >
-                  Load preset values
-                </Button>
-              </div>
+              <StartValuesBar
+                kind={detail.pattern.kind}
+                kindName={kindLabel(detail.pattern.kind).toLowerCase()}
+                dirty={form.formState.isDirty}
+                // Keep the maker's name for the piece; everything else comes from the standard or preset.
+                onLoad={(start) => form.reset({ ...start, name: form.getValues('name') ?? start.name }, { keepDefaultValues: true })}
+              />
               {specForm}
             </>
           ) : (

@@ -2,7 +2,6 @@ import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
-import { presetSpec } from '@shared/pattern/presets/index.ts';
 import { NoteSchema, PatternKindSchema, PatternNameSchema, TagsSchema } from '@shared/schemas/library.ts';
 import { PRESET_NAMES, type PresetName } from '@shared/schemas/strap-spec.ts';
 import { applyServerErrors } from '@/lib/form-errors.ts';
@@ -11,6 +10,7 @@ import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { cx } from '@/components/ui/cx.ts';
 import { useCreatePattern } from '../../api/mutations.ts';
+import { fetchStartSpec } from '../../api/start-spec.ts';
 import { KIND_LABELS } from '../../kinds.ts';
 
 // The create route's own field schemas; tags arrive as one comma-separated line.
@@ -21,20 +21,23 @@ const NewPatternSchema = z.object({
   note: NoteSchema,
 });
 
-/** Starts a pattern from a preset: pick the kind, name it, and revision 1 is saved. */
+/**
+ * Starts a pattern: pick the kind, name it, and revision 1 is saved from the shop's standard
+ * for that kind (the built-in preset where the shop has set none).
+ */
 export function NewPatternForm({ initialKind, onCreated }: { initialKind: PresetName; onCreated: (id: number) => void }) {
   const create = useCreatePattern();
   const [formError, setFormError] = useState<string>();
   const { register, handleSubmit, setError, formState, control } = useForm({
     resolver: zodResolver(NewPatternSchema),
-    defaultValues: { kind: initialKind, name: '', tags: '', note: 'Started from the preset.' },
+    defaultValues: { kind: initialKind, name: '', tags: '', note: 'Started from the shop’s standard.' },
   });
   const kind = useWatch({ control, name: 'kind' });
 
   const onSubmit = handleSubmit(async (v) => {
     setFormError(undefined);
-    const spec = { ...presetSpec(v.kind), name: v.name };
     try {
+      const spec = { ...(await fetchStartSpec(v.kind)).spec, name: v.name };
       const created = await create.mutateAsync({ name: v.name, kind: v.kind, spec, note: v.note, tags: v.tags });
       onCreated(created.pattern.id);
     } catch (err) {

@@ -11,7 +11,7 @@ const UNIT_OPTIONS = [
 ];
 const MODE_OPTIONS = [
   { value: 'rule', label: 'Shop rule' },
-  { value: 'fit', label: 'Fit: girth + ease, thickness counted' },
+  { value: 'fit', label: 'Fitted: middle hole at girth + ease' },
 ];
 const MEASURE_OPTIONS = [
   { value: 'blank', label: 'Blank = girth + allowance' },
@@ -36,7 +36,7 @@ export function MeasureSection({ control, unit, disabled, setValue }: SectionPro
   return (
     <FormSection title="Measure">
       <LengthField control={control} name="girthMm" label="Girth" unit={unit} disabled={disabled} hint="Neck, waist or wrist, measured where it is worn." />
-      <LengthField control={control} name="easeMm" label="Ease" unit={unit} disabled={disabled} hint="Room added in fit mode." />
+      <LengthField control={control} name="easeMm" label="Ease" unit={unit} disabled={disabled} hint="Room added when the length is fitted." />
       <SelectInput control={control} name="mode" label="Length from" options={MODE_OPTIONS} disabled={disabled} wrapperClassName="col-span-2" />
       <SelectInput control={control} name="rule.measure" label="The shop rule" options={MEASURE_OPTIONS} disabled={ruleOff} wrapperClassName="col-span-2" onChanged={reshape} />
       {rule.measure === 'fixed' ? (
@@ -46,7 +46,7 @@ export function MeasureSection({ control, unit, disabled, setValue }: SectionPro
       )}
       <SelectInput control={control} name="units" label="Show lengths in" options={UNIT_OPTIONS} disabled={disabled} />
       <div className="col-span-2">
-        <CheckboxInput control={control} name="closes" label="Closes round the body" hint="Counts the thickness in the loop." disabled={disabled} />
+        <CheckboxInput control={control} name="closes" label="Fastens round the body" hint="Buckled or snapped into a loop (a collar, a belt): the leather’s thickness is taken off the inside." disabled={disabled} />
       </div>
     </FormSection>
   );
