@@ -6,7 +6,6 @@ import type { PatternLayout } from '@shared/pattern/layout-types.ts';
 import type { Drawing } from '@shared/render/drawing.ts';
 import { renderSvg } from '@shared/render/svg.ts';
 import type { StrapSpec } from '@shared/schemas/strap-spec.ts';
-import { svgdomDom } from '../../render/svgdom-window.ts';
 
 const SHOWN = new Set(['cut', 'fold']);
 
@@ -16,5 +15,6 @@ export function proofSvg(layout: PatternLayout, spec: StrapSpec): string {
     ...full,
     pieces: full.pieces.map((p) => ({ ...p, items: p.items.filter((i) => SHOWN.has(i.layer) && i.type === 'path') })),
   };
-  return renderSvg(outline, svgdomDom(), { titleBlock: false });
+  // renderSvg writes the markup itself; no DOM is needed.
+  return renderSvg(outline, undefined, { titleBlock: false });
 }
