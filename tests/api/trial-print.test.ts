@@ -59,9 +59,12 @@ describe('trial print', () => {
     expect(res.body.error.fields.margin).toBe('Margin must be at most 1 in');
   });
 
-  it('when the unsaved girth cannot be drawn, then 400 keys it under spec so the editor puts it beside the girth', async () => {
+  it('when the unsaved girth cannot be drawn, then 400 keys it under spec and names it by its label in the display unit', async () => {
     const res = await request(t.app).post(trial(w.collar.pattern.id)).set('Cookie', w.maker.cookie).send({ spec: collarWithGirth(20), options: {} }).expect(400);
     expect(Object.keys(res.body.error.fields)).toContain('spec.girthMm');
+    // By its label in the collar's inches: 50 mm (GIRTH_MIN_MM) is 1 31/32 in to the nearest 1/32.
+    expect(res.body.error.fields['spec.girthMm']).toBe('Girth must be at least 1 31/32 in');
+    expect(res.body.error.message).not.toMatch(/girthMm|spec\./);
   });
 });
 

@@ -134,6 +134,27 @@ describe('the bench view', () => {
     await page.setViewportSize(SIZES.desktop);
   });
 
+  it('when the drawing is zoomed with keys, the wheel and the buttons, then its scale grows and shrinks and 0 fits it again', async () => {
+    await page.setViewportSize(SIZES.desktop);
+    await openPattern();
+    const drawing = page.getByTestId('drawing-preview');
+    const scale = async () => Number(await drawing.getAttribute('data-px-per-mm'));
+    const fitted = await scale();
+    await drawing.focus();
+    await page.keyboard.press('+');
+    await expect.poll(scale).toBeCloseTo(fitted * 1.25, 6);
+    const box = (await drawing.boundingBox())!;
+    await page.mouse.move(box.x + box.width / 2, box.y + box.height / 2);
+    await page.mouse.wheel(0, -400);
+    await expect.poll(scale).toBeGreaterThan(fitted * 1.25);
+    await page.getByRole('button', { name: 'Zoom in' }).click();
+    await page.getByRole('button', { name: 'Zoom out' }).click();
+    await drawing.focus();
+    await page.keyboard.press('0');
+    await expect.poll(() => drawing.getAttribute('data-mode')).toBe('fit');
+    expect(await scale()).toBeCloseTo(fitted, 6);
+  });
+
   it('when the screen is calibrated with a card, then true size draws 25.4 mm as 25.4 x the stored px per mm', async () => {
     await page.setViewportSize(SIZES.desktop);
     await openPattern();

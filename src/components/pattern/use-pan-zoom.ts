@@ -54,27 +54,20 @@ export function usePanZoom(sizeMm: { w: number; h: number }, truePxPerMm: number
     return () => ro.disconnect();
   }, []);
 
-  // Fit follows the box and the drawing; true size starts at the top-left corner.
+  // The whole drawing, centred in the box.
+  const fitView = useCallback((): View => ({ mode: 'fit', scale: fitScale, x: (boxPx.w - sizeMm.w * fitScale) / 2, y: (boxPx.h - sizeMm.h * fitScale) / 2 }), [fitScale, boxPx.w, boxPx.h, sizeMm.w, sizeMm.h]);
+
+  // Fit follows the box and the drawing; the other modes stay where the user put them.
   useEffect(() => {
-    setView((v) => {
-      if (v.mode !== 'fit') return v;
-      return { mode: 'fit', scale: fitScale, x: (boxPx.w - sizeMm.w * fitScale) / 2, y: (boxPx.h - sizeMm.h * fitScale) / 2 };
-    });
-  }, [fitScale, boxPx.w, boxPx.h, sizeMm.w, sizeMm.h]);
+    setView((v) => (v.mode === 'fit' ? fitView() : v));
+  }, [fitView]);
 
   const zoomAt = useCallback(
-    (factor: number, px?: number, py?: number) =>
-      setView((v) => {
-        const scale = clamp(v.scale * factor, minScale, MAX_PX_PER_MM);
-        const cx = px ?? boxPx.w / 2;
-        const cy = py ?? boxPx.h / 2;
-        const k = scale / v.scale;
-        return bound({ mode: 'free', scale, x: cx - (cx - v.x) * k, y: cy - (cy - v.y) * k });
-      }),
+    (factor: number, px?: number, py?: number) => setView((v) => bound(zoomAbout(v, factor, px ?? boxPx.w / 2, py ?? boxPx.h / 2, minScale))),
     [minScale, boxPx.w, boxPx.h, bound],
   );
   const panBy = useCallback((dx: number, dy: number) => setView((v) => bound({ ...v, mode: v.mode === 'fit' ? 'free' : v.mode, x: v.x + dx, y: v.y + dy })), [bound]);
-  const fit = useCallback(() => setView((v) => ({ ...v, mode: 'fit' })), []);
+  const fit = useCallback(() => setView(fitView()), [fitView]);
   /** True size at the stored ratio, or at `pxPerMm` just calibrated. */
   const trueSize = useCallback(
     (pxPerMm?: number) => {
@@ -153,6 +146,16 @@ export function usePanZoom(sizeMm: { w: number; h: number }, truePxPerMm: number
     trueSize,
     handlers: { onPointerDown, onPointerMove, onPointerUp, onPointerCancel: onPointerUp, onKeyDown },
   };
+}
+
+/**
+ * The view zoomed by `factor` about the box point (px, py): the point of the drawing under it
+ * stays under it (wheel and pinch), the scale kept between `minScale` and 40 px per mm.
+ */
+export function zoomAbout(v: View, factor: number, px: number, py: number, minScale: number): View {
+  const scale = clamp(v.scale * factor, minScale, MAX_PX_PER_MM);
+  const k = scale / v.scale;
+  return { mode: 'free', scale, x: px - (px - v.x) * k, y: py - (py - v.y) * k };
 }
 
 /** The drawing's size in mm from the SVG's own `width="..mm" height="..mm"`. */
