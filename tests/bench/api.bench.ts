@@ -10,7 +10,9 @@ import Database from 'better-sqlite3';
 import express from 'express';
 import { createTestApp } from '../helpers/test-app.ts';
 import { buildWorld, collarWithGirth } from '../helpers/shop-world.ts';
-import { verdict } from './measure.ts';
+import { machineLine, verdict } from './measure.ts';
+
+console.log(machineLine());
 
 const TARGET = { read: 3, save: 5, p99OverP50: 5 };
 const ROUNDS = 150;

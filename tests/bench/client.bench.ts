@@ -12,7 +12,9 @@ import { gzipSync } from 'node:zlib';
 import { chromium, type Page } from 'playwright-core';
 import { presetSpec } from '@shared/pattern/index.ts';
 import { startTestServer } from '../helpers/test-server.ts';
-import { verdict } from './measure.ts';
+import { machineLine, verdict } from './measure.ts';
+
+console.log(machineLine());
 
 const TARGET = { initialGzipKb: 150, frameMs: 16.7 };
 const OUT = join(process.cwd(), 'test-output', 'bench', 'client');

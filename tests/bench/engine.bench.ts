@@ -7,7 +7,9 @@ import { computeLayout, drawLayout, gradeSizes, parseSpec, presetSpec, PRESET_NA
 import { renderSvg } from '@shared/render/svg.ts';
 import { renderSvgViaDom } from '@shared/render/svg-via-dom.ts';
 import { svgdomDom } from '../../server/render/svgdom-window.ts';
-import { medianMs, num, rate, verdict } from './measure.ts';
+import { machineLine, medianMs, num, rate, verdict } from './measure.ts';
+
+console.log(machineLine());
 
 const TARGET = { layoutsPerS: 5000, svgsPerS: 1000, runMs: 20 };
 
@@ -28,10 +30,10 @@ for (const name of PRESET_NAMES) {
 const collar = presetSpec('collar');
 const sizes = Array.from({ length: 12 }, (_, i) => ({ name: `S${i + 1}`, girthMm: 228.6 + i * 25.4 }));
 const runSpec = parseSpec({ ...collar, sizes });
-const baselineMs = await medianMs(() => JSON.parse(JSON.stringify(runSpec)), 21);
-const gradeMs = await medianMs(() => gradeSizes(runSpec), 21);
-const drawnMs = await medianMs(() => sizes.map((s) => { const one = parseSpec({ ...collar, girthMm: s.girthMm }); return drawLayout(computeLayout(one), one); }), 21);
-console.log(`\n12-size collar run (median of 21)       ms    (x baseline ${baselineMs.toFixed(3)} ms)`);
+const baselineMs = await medianMs(() => JSON.parse(JSON.stringify(runSpec)), 21, 30);
+const gradeMs = await medianMs(() => gradeSizes(runSpec), 21, 30);
+const drawnMs = await medianMs(() => sizes.map((s) => { const one = parseSpec({ ...collar, girthMm: s.girthMm }); return drawLayout(computeLayout(one), one); }), 21, 30);
+console.log(`\n12-size collar run (median of 21 after 30 warm-ups)       ms    (x baseline ${baselineMs.toFixed(3)} ms)`);
 console.log(`graded: every size laid out        ${gradeMs.toFixed(2).padStart(8)}    (${(gradeMs / baselineMs).toFixed(1)})`);
 console.log(`laid out and drawn, as for print   ${drawnMs.toFixed(2).padStart(8)}    (${(drawnMs / baselineMs).toFixed(1)})`);
 

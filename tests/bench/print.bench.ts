@@ -12,11 +12,15 @@ import type { Drawing, DrawingPiece } from '@shared/render/drawing.ts';
 import { buildFullSizeSvg, printRevisionInline, type RevisionMeta } from '../../server/modules/print/index.ts';
 import { revisionDrawing } from '../../server/modules/print/revision-drawing.ts';
 import { darkSpan, parsePgm } from '../print/pdf-tools.ts';
-import { medianMs, verdict } from './measure.ts';
+import { machineLine, medianMs, verdict } from './measure.ts';
+
+console.log(machineLine());
 
 const OUT = join(process.cwd(), 'test-output', 'print', 'bench');
 mkdirSync(OUT, { recursive: true });
 const RUNS = 9;
+// Warm-ups before timing: a long-running server prints with warm JIT code (Chromium is native).
+const WARM = 8;
 /** How many times faster than Chromium each case must be (issue 10). */
 const TARGET_X = { single: 5, run: 3 };
 
@@ -83,7 +87,7 @@ try {
     const ours = await printRevisionInline(c.spec, opts, c.meta);
     const again = await printRevisionInline(c.spec, opts, c.meta);
     writeFileSync(join(OUT, `${c.name.replace(/\W+/g, '-')}-ours.pdf`), ours.body);
-    const oursMs = await medianMs(() => printRevisionInline(c.spec, opts, c.meta), RUNS);
+    const oursMs = await medianMs(() => printRevisionInline(c.spec, opts, c.meta), RUNS, WARM);
     const { drawing } = revisionDrawing(c.spec, opts, c.meta);
     const withSquare: Drawing = { ...drawing, pieces: [SQUARE, ...drawing.pieces] };
     const svg = buildFullSizeSvg(withSquare);
@@ -97,7 +101,7 @@ try {
     const chromePdf = await viaChromium();
     const chromePath = join(OUT, `${c.name.replace(/\W+/g, '-')}-chromium.pdf`);
     writeFileSync(chromePath, chromePdf);
-    const chromeMs = await medianMs(viaChromium, RUNS);
+    const chromeMs = await medianMs(viaChromium, RUNS, WARM);
     const side = squareSideMm(chromePath);
     const pages = (ours.body.toString('latin1').match(/\/Type \/Page\b/g) ?? []).length;
     const keeps = Math.abs(side - 25.4) / 25.4 < 0.001 ? 'kept 1:1' : 'NOT 1:1';
@@ -106,7 +110,7 @@ try {
       `${c.name.padEnd(22)} ${oursMs.toFixed(1).padStart(8)}   ${chromeMs.toFixed(1).padStart(11)}   ${(oursMs / chromeMs).toFixed(3).padStart(13)}   ${`${faster.toFixed(2)} (${c.targetX}) ${verdict(faster >= c.targetX)}`.padStart(17)}   ${String(pages).padStart(10)}   ${(ours.body.equals(again.body) ? 'yes' : 'NO').padStart(10)}   ${side.toFixed(3)} mm (${(((side - 25.4) / 25.4) * 100).toFixed(3)} %) ${keeps}`,
     );
   }
-  console.log(`\nmedian wall time of ${RUNS} runs after two warm-ups; Chromium writes one sheet the size of the SVG (no tiling, no page furniture).`);
+  console.log(`\nmedian wall time of ${RUNS} runs after ${WARM} warm-ups; Chromium writes one sheet the size of the SVG (no tiling, no page furniture).`);
 } finally {
   await browser.close();
 }
