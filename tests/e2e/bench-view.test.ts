@@ -124,7 +124,7 @@ describe('the bench view', () => {
       await page.getByLabel('Note for this revision').scrollIntoViewIfNeeded();
       await page.evaluate(() => window.scrollBy(0, -200));
       // Read in the page itself: the top of the bench card against the window while scrolled.
-      await expect.poll(() => page.evaluate(() => window.scrollY), name).toBeGreaterThan(1000);
+      await expect.poll(() => page.evaluate(() => window.scrollY), { message: name }).toBeGreaterThan(1000);
       const top = await page.getByTestId('bench-card').evaluate((el) => el.getBoundingClientRect().top);
       expect(top, name).toBeGreaterThanOrEqual(0);
       expect(top, name).toBeLessThan(16);
