@@ -5,6 +5,7 @@
 import { readFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
+import sharp from 'sharp';
 import { presetSpec } from '@shared/pattern/presets/index.ts';
 import { startTestServer } from '../helpers/test-server.ts';
 import { ensureClientBuilt } from './support/build-client.ts';
@@ -192,6 +193,21 @@ describe('an order from a measurement to a finished piece, in the browser', () =
     await expect(page.getByTestId('order-history').textContent()).resolves.toMatch(/measure/i);
   });
 
+  it('when the apprentice uploads a web page renamed .png, then it is refused by name; a real photo shows as a thumbnail', async () => {
+    await page.getByLabel('Photo').setInputFiles({ name: 'biscuit.png', mimeType: 'image/png', buffer: Buffer.from('<!doctype html><title>not a photo</title>') });
+    await page.getByRole('button', { name: 'Upload photo' }).click();
+    await page.getByText('The photo was not added').waitFor();
+    await expect(page.getByRole('alert').filter({ hasText: 'The photo was not added' }).textContent()).resolves.toContain('Choose a JPEG, PNG or WebP photo.');
+    // A 64 x 40 px tan swatch made by sharp, the photo library the server also uses.
+    const png = await sharp({ create: { width: 64, height: 40, channels: 3, background: { r: 163, g: 108, b: 57 } } }).png().toBuffer();
+    await page.getByLabel('Photo').setInputFiles({ name: 'biscuit-blank.png', mimeType: 'image/png', buffer: png });
+    await page.getByLabel('Caption').fill('Blank cut from the chestnut bridle');
+    await page.getByRole('button', { name: 'Upload photo' }).click();
+    await page.getByText('Photo added.').waitFor();
+    await page.getByTestId('order-photos').getByRole('img', { name: 'Blank cut from the chestnut bridle' }).waitFor();
+    await snapAll(page, '07b-order-photo');
+  });
+
   it('when the apprentice makes a proof link and the customer approves it, then the order shows the approval', async () => {
     await page.getByRole('button', { name: 'Create proof link' }).click();
     const url = (await page.getByTestId('proof-url').getAttribute('href')) ?? '';
@@ -199,10 +215,11 @@ describe('an order from a measurement to a finished piece, in the browser', () =
     await customerPage.goto(url);
     const p = customerPage;
     await p.getByRole('heading', { name: new RegExp(`for ${customer.wearer}$`) }).waitFor();
-    await p.getByTestId('drawing-preview').locator('svg').waitFor();
+    await p.getByTestId('proof-drawing').locator('svg').waitFor();
     // The proof never carries the template or cutter files.
     expect(await p.locator('a[href*="pdf"], a[href*="cutter"], a[href*=".svg"]').count()).toBe(0);
     await expect(p.getByTestId('proof-facts').textContent()).resolves.toContain('14 1/8 in');
+    await p.getByTestId('proof-photos').getByRole('img', { name: 'Blank cut from the chestnut bridle' }).waitFor();
     await snapAll(p, '08-proof');
     await p.getByLabel('Your name').fill(customer.name);
     await p.getByRole('button', { name: 'Approve' }).click();
@@ -219,6 +236,17 @@ describe('an order from a measurement to a finished piece, in the browser', () =
     const file = await (await download).path();
     expect(readFileSync(file).subarray(0, 5).toString()).toBe('%PDF-');
     await page.getByTestId('print-log').getByText(`Printed on A4 by ${apprentice.name}`).waitFor();
+  });
+
+  it('when the apprentice deletes the photo, then the screen asks first and the deletion is in the history', async () => {
+    await page.getByRole('button', { name: /^Delete photo/ }).click();
+    await page.getByRole('group', { name: 'Delete this photo?' }).waitFor();
+    await page.getByRole('button', { name: 'Keep' }).click();
+    expect(await page.getByTestId('order-photos').getByRole('img').count()).toBe(1);
+    await page.getByRole('button', { name: /^Delete photo/ }).click();
+    await page.getByRole('group', { name: 'Delete this photo?' }).getByRole('button', { name: 'Delete photo' }).click();
+    await page.getByText('No photos yet.').waitFor();
+    await expect(page.getByTestId('order-history').textContent()).resolves.toMatch(/photo/i);
   });
 
   it('when the apprentice moves the order along the flow, then it ends handed over with each move in its history, on the board too', async () => {

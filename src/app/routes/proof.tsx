@@ -3,8 +3,8 @@ import { useQuery, type QueryClient } from '@tanstack/react-query';
 import { formatLength } from '@shared/units/format-length.ts';
 import { proofPageQueryOptions } from '@/features/customer-links/api/queries.ts';
 import { ProofAnswer } from '@/features/customer-links/components/proof-answer.tsx';
+import { ProofDrawing } from '@/features/customer-links/components/proof-drawing.tsx';
 import { PublicFrame } from '@/features/customer-links/components/public-frame.tsx';
-import { DrawingView } from '@/components/pattern/drawing-view.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { Panel } from '@/components/ui/panel.tsx';
 import { isApiError } from '@/lib/api-client.ts';
@@ -67,7 +67,7 @@ export function Component() {
         <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_320px]">
           <div className="grid min-w-0 gap-6">
             <Panel title="The piece">
-              <DrawingView svg={p.drawingSvg} label={`Drawing of ${p.pieceName}`} />
+              <ProofDrawing svg={p.drawingSvg} label={`Drawing of ${p.pieceName}`} />
             </Panel>
             {p.photos.length > 0 && (
               <Panel title="Photos">

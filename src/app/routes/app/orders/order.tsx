@@ -57,9 +57,12 @@ export function Component() {
         <StageFlow order={order} canMove={can(role, 'orders.move')} />
       </Panel>
 
+      {/* On a phone the panels run in the order the bench needs them (price and job sheet before
+          photos and history); from lg the two columns are wrappers again. */}
       <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_380px]">
-        <div className="grid min-w-0 gap-6">
+        <div className="contents lg:grid lg:min-w-0 lg:gap-6">
           <Panel
+            className="order-1 lg:order-none"
             title="The order"
             aside={
               can(role, 'orders.update') && !editing ? (
@@ -75,21 +78,21 @@ export function Component() {
               <OrderFacts order={order} customerHref={paths.customers.detail.getHref(order.customer.id)} patternHref={paths.patterns.detail.getHref(order.pattern.id)} />
             )}
           </Panel>
-          <Panel title={`Photos (${order.photos.length})`}>
+          <Panel className="order-5 lg:order-none" title={`Photos (${order.photos.length})`}>
             <PhotoPanel orderId={order.id} photos={order.photos} canUpload={can(role, 'orders.photos.upload')} canDelete={can(role, 'orders.photos.delete')} />
           </Panel>
-          <Panel title="History">
+          <Panel className="order-6 lg:order-none" title="History">
             <OrderHistory events={order.history} />
           </Panel>
         </div>
-        <div className="grid min-w-0 gap-6">
-          <Panel title="Price">
+        <div className="contents lg:grid lg:min-w-0 lg:gap-6">
+          <Panel className="order-2 lg:order-none" title="Price">
             <PriceBreakdown price={order.price} />
           </Panel>
-          <Panel title="Job sheet">
+          <Panel className="order-3 lg:order-none" title="Job sheet">
             <JobSheetPanel orderId={order.id} prints={order.prints} ready={order.girthMm !== null} />
           </Panel>
-          <Panel title="Customer links">
+          <Panel className="order-4 lg:order-none" title="Customer links">
             <CustomerLinksPanel order={order} canRequest={can(role, 'orders.requestMeasurement')} canProof={can(role, 'orders.proof')} />
           </Panel>
         </div>

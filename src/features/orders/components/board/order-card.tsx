@@ -28,11 +28,11 @@ export function OrderCard({ order, href, onMove, moving }: OrderCardProps) {
       }}
       data-testid={`order-card-${order.number}`}
     >
-      <div className="flex items-baseline justify-between gap-2">
-        <Link to={href} className="font-semibold text-hide-900 underline-offset-2 hover:underline">
+      <div className="flex flex-wrap items-baseline justify-between gap-x-2">
+        <Link to={href} className="whitespace-nowrap font-semibold text-hide-900 underline-offset-2 hover:underline">
           Order {order.number}
         </Link>
-        <span className={cx('text-xs', order.overdue ? 'font-semibold text-thread-700' : 'text-hide-600')}>
+        <span className={cx('whitespace-nowrap text-xs', order.overdue ? 'font-semibold text-thread-700' : 'text-hide-600')}>
           {order.overdue ? 'Overdue · ' : 'Due '}
           {formatDay(order.dueDate)}
         </span>
