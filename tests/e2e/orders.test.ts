@@ -287,6 +287,29 @@ describe('an order from a measurement to a finished piece, in the browser', () =
     await snapAll(page, '13-customer');
   });
 
+  it('when a maker and the owner open the orders, then both may move orders and only the owner sees Pricing', async () => {
+    // The customer's browser is done with its links; a maker joins in it.
+    const maker = { name: 'Tobias Harrow', email: 'tobias.orders@harrowfinch.example', password: 'bridle butt and edge kote' };
+    const invite = await ownerPage.request.post(server.url + '/api/shop/invites', { headers: { Origin: server.url }, data: { email: maker.email, role: 'maker' } });
+    expect(invite.status()).toBe(201);
+    const mail = await server.mailbox.waitFor((m) => m.recipients.includes(maker.email));
+    const token = /\/invite\/([A-Za-z0-9_-]+)/.exec(mail.text)?.[1] ?? '';
+    const joined = await customerPage.request.post(`${server.url}/api/invites/${token}/accept`, { headers: { Origin: server.url }, data: { name: maker.name, password: maker.password } });
+    expect(joined.status()).toBe(201);
+    await customerPage.goto(orderUrl);
+    await customerPage.getByRole('heading', { name: /^Order \d+$/ }).waitFor();
+    expect(await customerPage.getByRole('button', { name: 'Back to Finished' }).count()).toBe(1);
+    expect(await customerPage.getByRole('link', { name: 'Pricing' }).count()).toBe(0);
+    await snapAll(customerPage, '15-maker-order');
+    await ownerPage.goto(orderUrl);
+    await ownerPage.getByRole('heading', { name: /^Order \d+$/ }).waitFor();
+    expect(await ownerPage.getByRole('link', { name: 'Pricing' }).count()).toBe(1);
+    await snapAll(ownerPage, '16-owner-order');
+    await ownerPage.goto(server.url + '/customers');
+    await ownerPage.getByTestId('customer-list').getByText(customer.name).waitFor();
+    await snapAll(ownerPage, '17-owner-customers');
+  });
+
   it('when the owner opens the pattern share page, then it says it is for makers', async () => {
     const res = await ownerPage.request.post(`${server.url}/api/patterns/1/share`, { headers: { Origin: server.url }, data: {} });
     expect(res.status()).toBe(201);

@@ -12,7 +12,7 @@ export function ProofDrawing({ svg, label }: { svg: string; label: string }) {
         className="drawing-screen overflow-hidden rounded-md border border-hide-200 bg-white p-3 [&>svg]:h-auto [&>svg]:w-full"
         dangerouslySetInnerHTML={{ __html: svg }}
       />
-      <figcaption className="mt-1.5 text-xs text-hide-600">Drawn to scale, shown smaller than life. The lengths beside it are the ones to check.</figcaption>
+      <figcaption className="mt-1.5 text-xs text-hide-600">Drawn to scale, shown smaller than life. The lengths in the details are the ones to check.</figcaption>
     </figure>
   );
 }
