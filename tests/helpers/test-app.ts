@@ -1,7 +1,7 @@
 // A fresh, fully migrated database per call and the app built on it. Shared by the API tests
 // (supertest on `app`) and the end-to-end tests (startTestServer). SQLite by default; in the
-// vitest project `postgres` (tests/pg/setup.ts sets LATCHET_TEST_PG_URL) a new PostgreSQL
-// database copied from the run's migrated template instead.
+// vitest project `postgres` (tests/pg/setup.ts sets LATCHET_TEST_PG_URL) an empty PostgreSQL
+// database at the latest level instead (tests/helpers/pg-test-db.ts).
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -67,7 +67,7 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
       transport.close();
       await smtp.close();
       await db.destroy();
-      await pg?.drop();
+      await pg?.release();
       rmSync(dir, { recursive: true, force: true });
     },
   };

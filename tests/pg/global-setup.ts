@@ -4,7 +4,7 @@
 import type { TestProject } from 'vitest/node';
 import { migrateLatest, openDb } from '../../server/db/connection.ts';
 import { startPgCluster, type PgCluster } from '../helpers/pg-cluster.ts';
-import { createDatabase, databaseUrl, dropDatabase } from '../helpers/pg-test-db.ts';
+import { createDatabase, databaseUrl, dropDatabase, dropTestDatabases } from '../helpers/pg-test-db.ts';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -33,6 +33,7 @@ export default async function setup(project: TestProject) {
   project.provide('pgServerUrl', serverUrl);
   project.provide('pgTemplate', template);
   return async () => {
+    await dropTestDatabases(serverUrl).catch(() => undefined);
     await dropDatabase(serverUrl, template).catch(() => undefined);
     await cluster?.stop();
   };
