@@ -22,7 +22,7 @@ describe('shop standards over the built-in presets', () => {
     expect(spec.easeMm).toBe(12.7);
     expect(spec.hardware.buckle).toMatchObject({ insideWidthMm: 38.1, tongueLengthMm: 30, tongueWireMm: 4, style: 'centre-bar' });
     const end = spec.pieces[0]!.end;
-    expect(end.kind === 'adjustable' && end.holes).toMatchObject({ count: 6, nominalIndex: 2 });
+    expect(end.kind === 'adjustable' && end.holes).toMatchObject({ count: 6, middleHole: 3 });
   });
 
   it('when a kind points at a buckle id the hardware list lacks, then the schema names the buckle field', () => {

@@ -21,8 +21,8 @@ export function applyKindStandard(spec: StrapSpec, std: KindStandard, hardware: 
   if (std.holes && strap.end.kind === 'adjustable') {
     const h = strap.end.holes;
     // Keep the preset's nominal hole when the count is the same; otherwise the middle one.
-    const nominalIndex = std.holes.count === h.count ? h.nominalIndex : Math.floor((std.holes.count - 1) / 2);
-    strap.end.holes = { ...h, count: std.holes.count, spacingMm: std.holes.spacingMm, diameterMm: std.holes.diameterMm, nominalIndex };
+    const middleHole = std.holes.count === h.count ? h.middleHole : Math.ceil(std.holes.count / 2);
+    strap.end.holes = { ...h, count: std.holes.count, spacingMm: std.holes.spacingMm, diameterMm: std.holes.diameterMm, middleHole };
   }
   for (const piece of out.pieces) for (const row of piece.stitchRows) row.pitchMm = std.stitchPitchMm;
 

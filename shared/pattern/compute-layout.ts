@@ -1,5 +1,6 @@
 import type { PieceSpec, StrapSpec } from '../schemas/strap-spec.ts';
 import { BLANK_MAX_MM } from '../schemas/strap-spec.ts';
+import { upgradeSpec } from '../schemas/spec-upgrade.ts';
 import { formatLength } from '../units/format-length.ts';
 import { thicknessMm } from '../units/length.ts';
 import { centrelineFromInnerMm } from './bend.ts';
@@ -56,7 +57,7 @@ function layoutPiece(spec: StrapSpec, piece: PieceSpec, index: number, lengthMm:
         `${piece.role === 'strap' ? 'Tip holes' : `${piece.name}: tip holes`}: ${h.count} holes ${len(h.spacingMm)} apart need ${len((h.count - 1) * h.spacingMm + h.firstFromTipMm)} from the tip, ${len(lengthMm - startZone)} available before the buckle end`,
         `at most ${len(lengthMm - startZone)} of holes and tip`,
       );
-    at.forEach((x, i) => features.push({ kind: 'adjust-hole', atMm: x, yMm: 0, diameterMm: h.diameterMm, punch: nearestPunch(h.diameterMm), layers: 1, label: i === h.nominalIndex ? 'hole (nominal)' : `hole ${i + 1}` }));
+    at.forEach((x, i) => features.push({ kind: 'adjust-hole', atMm: x, yMm: 0, diameterMm: h.diameterMm, punch: nearestPunch(h.diameterMm), layers: 1, label: i === h.middleHole - 1 ? `hole ${i + 1} (middle)` : `hole ${i + 1}` }));
   }
   features.sort((a, b) => a.atMm - b.atMm || a.yMm - b.yMm);
   for (const f of features) {
@@ -95,7 +96,9 @@ function layoutPiece(spec: StrapSpec, piece: PieceSpec, index: number, lengthMm:
  * changed. Lengths in mm, positions from each piece's datum. Throws {@link EngineError} on
  * impossible geometry, naming the field and the limit.
  */
-export function computeLayout(spec: StrapSpec): PatternLayout {
+export function computeLayout(stored: StrapSpec): PatternLayout {
+  // A revision saved before holes were numbered from 1 is read as today's spec.
+  const spec = upgradeSpec(stored);
   const t = thicknessMm(spec.thickness);
   const strapIdx = spec.pieces.findIndex((p) => p.role === 'strap');
   if (strapIdx < 0 || spec.pieces.filter((p) => p.role === 'strap').length > 1)

@@ -47,7 +47,7 @@ const specArb: fc.Arbitrary<StrapSpec> = fc
     strap.taper = r.taperTo === undefined ? [] : [{ atMm: 0, from: 'start', widthMm: r.width }, { atMm: r.taperFromEnd, from: 'end', widthMm: r.taperTo }];
     if (r.stitch) strap.stitchRows = [{ path: r.stitch.path, fromMm: 60, fromRef: 'start', toMm: 60, toRef: 'end', offsetMm: r.stitch.offset, pitchMm: r.stitch.pitch, tolerancePct: 5 }];
     if (strap.end.kind === 'adjustable') {
-      strap.end.holes = { ...strap.end.holes, count: r.count, nominalIndex: r.nominal, spacingMm: r.spacing, firstFromTipMm: r.tipGap };
+      strap.end.holes = { ...strap.end.holes, count: r.count, middleHole: r.nominal + 1, spacingMm: r.spacing, firstFromTipMm: r.tipGap };
     }
     strap.end.shape = r.shape;
     return s;

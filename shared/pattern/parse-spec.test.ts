@@ -40,15 +40,15 @@ describe('parseSpec and spec limits', () => {
     expect(caught(() => parseSpec(rest)).message).toBe('Hardware is required');
   });
 
-  it('when the nominal hole is past the last hole, then computeLayout names the field and the highest allowed index', () => {
+  it('when the middle hole is past the last hole, then computeLayout names the field and the highest hole, counted from 1', () => {
     const s = presetSpec('collar');
     const end = s.pieces[0]!.end;
     if (end.kind !== 'adjustable') throw new Error('preset changed');
-    end.holes.nominalIndex = 5;
+    end.holes.middleHole = 6;
     const e = caught(() => computeLayout(s));
-    expect(e.field).toBe('pieces.0.end.holes.nominalIndex');
+    expect(e.field).toBe('pieces.0.end.holes.middleHole');
     expect(e.limit).toBe('at most 5');
-    expect(e.message).toBe('Tip hole it is fitted at: there is no hole 6; the tip has 5 holes');
+    expect(e.message).toBe('Tip middle hole: there is no hole 6; the tip has 5 holes');
   });
 
   it('when the holes need more strap than there is, then the error says how much they need and how much is available', () => {

@@ -41,7 +41,7 @@ describe('specAtGirth', () => {
     expect(end.holes.count).toBe(3);
     expect(end.holes.spacingMm).toBeCloseTo(0.5 * IN, 9);
     // The middle of five stays the middle of three.
-    expect(end.holes.nominalIndex).toBe(1);
+    expect(end.holes.middleHole).toBe(2);
     // The buckle follows the width when the size does not name one (bought to the strap's width).
     expect(s.hardware.buckle.insideWidthMm).toBeCloseTo(0.75 * IN, 9);
     // An English point keeps its proportion: 3/4 in deep on 1 in becomes 9/16 in on 3/4 in.

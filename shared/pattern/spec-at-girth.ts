@@ -1,6 +1,7 @@
 import type { EndShape, EndSpec, PieceSpec, SizeSpec, StrapSpec } from '../schemas/strap-spec.ts';
 import { WIDTH_MAX_MM, WIDTH_MIN_MM } from '../schemas/strap-spec.ts';
 import { EngineError } from './engine-error.ts';
+import { upgradeSpec } from '../schemas/spec-upgrade.ts';
 
 /** Where to fit the pattern: a girth, or one named size of its run. */
 export type FitAt = { girthMm: number } | { sizeName: string };
@@ -38,13 +39,13 @@ function scaleEnd(end: EndSpec, k: number): EndSpec {
   }
 }
 
-/** The strap piece's tip holes with the size's count and spacing; the worn hole keeps its place in the row. */
+/** The strap piece's tip holes with the size's count and spacing; the middle hole keeps its place in the row. */
 function gradeHoles(piece: PieceSpec, holes: NonNullable<SizeSpec['holes']>): PieceSpec {
   if (piece.end.kind !== 'adjustable') return piece;
   const h = piece.end.holes;
   const count = holes.count ?? h.count;
-  const nominalIndex = h.count > 1 ? Math.min(count - 1, Math.round((h.nominalIndex * (count - 1)) / (h.count - 1))) : Math.floor((count - 1) / 2);
-  return { ...piece, end: { ...piece.end, holes: { ...h, count, spacingMm: holes.spacingMm ?? h.spacingMm, nominalIndex } } };
+  const middleHole = h.count > 1 ? Math.min(count, 1 + Math.round(((h.middleHole - 1) * (count - 1)) / (h.count - 1))) : Math.ceil(count / 2);
+  return { ...piece, end: { ...piece.end, holes: { ...h, count, spacingMm: holes.spacingMm ?? h.spacingMm, middleHole } } };
 }
 
 /** The spec with one size's graded width, holes and hardware applied (girth not yet). */
@@ -101,7 +102,8 @@ export function findSize(spec: StrapSpec, name: string): SizeSpec {
  * width, holes and hardware, as a single-size spec (no size run). Pure: nothing is saved and
  * the spec passed in is not changed. The result still needs computeLayout to be checked.
  */
-export function specAtGirth(spec: StrapSpec, at: FitAt): StrapSpec {
+export function specAtGirth(stored: StrapSpec, at: FitAt): StrapSpec {
+  const spec = upgradeSpec(stored);
   if ('sizeName' in at) {
     const size = findSize(spec, at.sizeName);
     return { ...applySize(spec, size), girthMm: size.girthMm, sizes: [] };

@@ -34,9 +34,9 @@ export function strapBlankMm(spec: StrapSpec, piece: PieceSpec, mode: 'rule' | '
   const t = parts.thicknessMm;
   const a = attachFromEndMm(piece.start, t);
   const adj = piece.end.kind === 'adjustable' ? piece.end.holes : null;
-  if (adj && adj.nominalIndex >= adj.count)
-    throw fieldError(spec, `${field}.end.holes.nominalIndex`, `there is no hole ${adj.nominalIndex + 1}; the tip has ${adj.count} holes`, `at most ${adj.count}`);
-  const beyondNominal = adj ? (adj.count - 1 - adj.nominalIndex) * adj.spacingMm + adj.firstFromTipMm : attachFromEndMm(piece.end, t);
+  if (adj && adj.middleHole > adj.count)
+    throw fieldError(spec, `${field}.end.holes.middleHole`, `there is no hole ${adj.middleHole}; the tip has ${adj.count} holes`, `at most ${adj.count}`);
+  const beyondNominal = adj ? (adj.count - adj.middleHole) * adj.spacingMm + adj.firstFromTipMm : attachFromEndMm(piece.end, t);
   if (mode === 'rule') {
     const r = spec.rule;
     if (r.measure === 'fixed') return r.blankMm;
@@ -59,7 +59,8 @@ export function fitReport(spec: StrapSpec, piece: PieceSpec, lengthMm: number, p
     const loopMm = atMm - a + parts.outsideMm;
     return { atMm, loopMm, innerMm: inner(spec, loopMm, t) };
   });
-  const nominalIndex = piece.end.kind === 'adjustable' ? piece.end.holes.nominalIndex : 0;
+  // The layout indexes its holes from 0; the spec numbers them from 1 as people do.
+  const nominalIndex = piece.end.kind === 'adjustable' ? piece.end.holes.middleHole - 1 : 0;
   const inners = holes.map((h) => h.innerMm);
   const nominal = holes[nominalIndex] ?? holes[0]!;
   return {

@@ -55,7 +55,7 @@ describe('layout warnings', () => {
     if (end.kind !== 'adjustable') throw new Error('preset changed');
     end.holes.firstFromTipMm = 20;
     end.holes.count = 3;
-    end.holes.nominalIndex = 2;
+    end.holes.middleHole = 3;
     expect(codes(s)).toContain('tail-short');
   });
 

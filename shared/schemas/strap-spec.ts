@@ -67,16 +67,25 @@ export const EndSchema = z.discriminatedUnion('kind', [
     bodyHoles: z.array(EndHoleSchema).max(L.FEATURES_MAX).default([]),
     shape: EndShapeSchema.default({ kind: 'square' }),
   }),
-  /** Adjustment holes for a buckle tongue; hole 0 is the one nearest the datum (buckle) end. */
+  /**
+   * Adjustment holes for a buckle tongue, numbered from 1 at the buckle end as every table,
+   * drawing and PDF numbers them. `middleHole` is the hole the strap fits the girth at.
+   * Specs saved before it existed carry `nominalIndex` (the same hole counted from 0); they
+   * are read as `middleHole = nominalIndex + 1`. Neither given: the middle of the row.
+   */
   z.object({
     kind: z.literal('adjustable'),
-    holes: z.object({
-      count: count('hole count', L.HOLE_COUNT_MIN, L.HOLE_COUNT_MAX),
-      spacingMm: mm('hole spacing', L.HOLE_SPACING_MIN_MM, L.HOLE_SPACING_MAX_MM),
-      diameterMm: mm('hole diameter', L.HOLE_DIAMETER_MIN_MM, L.HOLE_DIAMETER_MAX_MM),
-      firstFromTipMm: mm('first hole from the tip', 3, 1000),
-      nominalIndex: count('nominal hole', 0, L.HOLE_COUNT_MAX - 1),
-    }),
+    holes: z
+      .object({
+        count: count('hole count', L.HOLE_COUNT_MIN, L.HOLE_COUNT_MAX),
+        spacingMm: mm('hole spacing', L.HOLE_SPACING_MIN_MM, L.HOLE_SPACING_MAX_MM),
+        diameterMm: mm('hole diameter', L.HOLE_DIAMETER_MIN_MM, L.HOLE_DIAMETER_MAX_MM),
+        firstFromTipMm: mm('first hole from the tip', 3, 1000),
+        middleHole: count('middle hole', 1, L.HOLE_COUNT_MAX).optional(),
+        /** @deprecated read only, from specs saved before holes were numbered from 1. */
+        nominalIndex: count('middle hole', 0, L.HOLE_COUNT_MAX - 1).optional(),
+      })
+      .transform(({ nominalIndex, middleHole, ...h }) => ({ ...h, middleHole: middleHole ?? (nominalIndex !== undefined ? nominalIndex + 1 : Math.ceil(h.count / 2)) })),
     shape: EndShapeSchema.default({ kind: 'english-point', depthMm: 19 }),
   }),
   /** A plain end with holes for screws, snaps or rivets. */

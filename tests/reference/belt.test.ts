@@ -17,7 +17,7 @@ describe('belt preset against the trade rules (common practice)', () => {
     expect(layout.fit!.holes[2]!.loopMm).toBeCloseTo(spec.girthMm + 2 * IN, 6);
   });
 
-  it('when laid out, then there are five holes 1 in apart with the middle one nominal', () => {
+  it('when laid out, then there are five holes 1 in apart with the third (the middle one) as the middle hole', () => {
     expect(holes).toHaveLength(5);
     for (let i = 1; i < 5; i++) expect(holes[i]!.atMm - holes[i - 1]!.atMm).toBeCloseTo(IN, 6);
     expect(layout.fit!.nominalIndex).toBe(2);

@@ -59,14 +59,14 @@ describe('collar preset (common practice)', () => {
     expect(seven.layers).toBe(1);
   });
 
-  it('when laid out, then five 3/16 in adjustment holes run 3/4 in apart, the first 3 in from the tip, the middle one nominal', () => {
+  it('when laid out, then five 3/16 in adjustment holes run 3/4 in apart, the first 3 in from the tip, hole 3 of 5 (counted from the buckle) the middle hole', () => {
     const holes = at('adjust-hole');
     expect(holes).toHaveLength(5);
     for (const h of holes) near(h.diameterMm!, (3 * IN) / 16);
     near(strap.blankLengthMm - holes[4]!.atMm, 3 * IN);
     for (let i = 1; i < 5; i++) near(holes[i]!.atMm - holes[i - 1]!.atMm, 0.75 * IN);
     expect(layout.fit!.nominalIndex).toBe(2);
-    expect(holes[2]!.label).toContain('nominal');
+    expect(holes[2]!.label).toBe('hole 3 (middle)');
   });
 
   it('when laid out, then every hole and the slot lie on the centreline', () => {

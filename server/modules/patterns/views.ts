@@ -1,6 +1,7 @@
 // Rows -> the JSON the API answers (ISO times, parsed JSON columns, camelCase).
 import type { PatternView, RevisionView } from '@shared/schemas/library.ts';
 import type { StrapSpec } from '@shared/schemas/strap-spec.ts';
+import { upgradeSpec } from '@shared/schemas/spec-upgrade.ts';
 import type { RevisionRow } from '../revisions/revisions.repository.ts';
 import type { PatternRow } from './patterns.repository.ts';
 
@@ -23,7 +24,8 @@ export function patternView(row: PatternRow, following: boolean): PatternView {
 export function revisionView(row: Omit<RevisionRow, 'spec'> & { spec?: string }): RevisionView {
   return {
     number: row.number,
-    ...(row.spec !== undefined ? { spec: JSON.parse(row.spec) as StrapSpec } : {}),
+    // Old revisions count the middle hole from 0; the editor and every reader get today's shape.
+    ...(row.spec !== undefined ? { spec: upgradeSpec(JSON.parse(row.spec) as StrapSpec) } : {}),
     engineVersion: row.engine_version,
     note: row.note,
     createdAt: iso(row.created_at),

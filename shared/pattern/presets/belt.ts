@@ -53,7 +53,7 @@ export function beltPreset(): StrapSpec {
         },
         end: {
           kind: 'adjustable',
-          holes: { count: 5, spacingMm: inch(1), diameterMm: inch(3 / 16), firstFromTipMm: inch(2.5 * WIDTH_IN), nominalIndex: 2 },
+          holes: { count: 5, spacingMm: inch(1), diameterMm: inch(3 / 16), firstFromTipMm: inch(2.5 * WIDTH_IN), middleHole: 3 },
           shape: { kind: 'english-point', depthMm: inch(1) },
         },
         taper: [],

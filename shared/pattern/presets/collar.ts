@@ -51,7 +51,7 @@ export function collarPreset(): StrapSpec {
         },
         end: {
           kind: 'adjustable',
-          holes: { count: 5, spacingMm: inch(0.75), diameterMm: inch(3 / 16), firstFromTipMm: inch(3), nominalIndex: 2 },
+          holes: { count: 5, spacingMm: inch(0.75), diameterMm: inch(3 / 16), firstFromTipMm: inch(3), middleHole: 3 },
           shape: { kind: 'english-point', depthMm: inch(0.75) },
         },
         taper: [],

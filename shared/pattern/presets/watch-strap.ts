@@ -43,7 +43,7 @@ export function watchStrapPreset(): StrapSpec {
         start: lugFold,
         end: {
           kind: 'adjustable',
-          holes: { count: 7, spacingMm: 6, diameterMm: 2.4, firstFromTipMm: 30, nominalIndex: 3 },
+          holes: { count: 7, spacingMm: 6, diameterMm: 2.4, firstFromTipMm: 30, middleHole: 4 },
           shape: { kind: 'round', radiusMm: 9 },
         },
         taper: [
