@@ -5,6 +5,7 @@ import { execFileSync } from 'node:child_process';
 import { mkdirSync, writeFileSync } from 'node:fs';
 import request from 'supertest';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { cautionsFor } from '@shared/pattern/cautions.ts';
 import type { OrderDetail } from '@shared/schemas/order-views.ts';
 import { createTestApp, type TestApp } from '../helpers/test-app.ts';
 import { buildWorld, type ShopWorld } from '../helpers/shop-world.ts';
@@ -44,6 +45,30 @@ describe('job sheet', () => {
     expect(o.prints).toHaveLength(1);
     expect(o.prints[0]).toMatchObject({ paper: 'a4', by: { id: w.apprentice.id, name: 'Ilse Park' } });
     expect(o.history[0]!.summary).toBe('Job sheet printed on A4 paper at 14 in girth.');
+  });
+
+  it.each(['a4', 'letter'] as const)("when a maker prints the job sheet of an order of two on %s, then its page gives the quantity, leather colour and finish, thread and notes, and the cautions stay whole", async (paper) => {
+    const notes = 'Initials JB stamped by the buckle. Customer collects on a Saturday; ring before. '.repeat(12); // 1,000+ characters, the order form allows 2,000
+    const { order } = await makeOrder(t, w, w.maker, { quantity: 2, leatherColour: 'Oxblood', leatherFinish: 'Matte, edges burnished', thread: 'Black waxed 0.8 mm', notes });
+    const res = await request(t.app).get(`/api/orders/${order.id}/job-sheet.pdf?paper=${paper}`).set('Cookie', w.maker.cookie).buffer(true).parse(binary).expect(200);
+    mkdirSync('test-output/orders', { recursive: true });
+    const file = `test-output/orders/job-sheet-order-${paper}.pdf`;
+    writeFileSync(file, res.body as Buffer);
+    const pages = Number(/Pages:\s+(\d+)/.exec(execFileSync('pdfinfo', [file]).toString())?.[1]);
+    // The job sheet is the last page; read it alone so a match cannot come from the template pages.
+    const sheet = execFileSync('pdftotext', ['-f', String(pages), '-l', String(pages), file, '-']).toString().replace(/\s+/g, ' ');
+    expect(sheet).toContain(`Order ${order.number}`);
+    expect(sheet).toContain('For Pepper (dog), ordered by Odile Brann');
+    expect(sheet).toContain('Quantity: 2 (cut, punch and set hardware for each)');
+    expect(sheet).toContain('Colour: Oxblood · Finish: Matte, edges burnished');
+    expect(sheet).toContain('Thread: Black waxed 0.8 mm');
+    expect(sheet).toContain('Notes: Initials JB stamped by the buckle.');
+    expect(sheet).toContain("(the rest is in the order's notes)"); // cut so the page holds it all
+    // The cautions come last on the page: still there in full after the order's long notes.
+    // Every caution of a collar (shared/pattern/cautions.ts), the last one included.
+    const cautions = sheet.slice(sheet.indexOf('Cautions'));
+    for (const c of cautionsFor('collar')) expect(cautions).toContain(c.replace(/\s+/g, ' '));
+    expect(sheet).not.toMatch(/leather_colour|leatherColour|undefined|null/);
   });
 
   it('when the order has no girth yet, then the job sheet is refused (409) saying why, and nothing is logged', async () => {

@@ -1,14 +1,15 @@
-// The order's job sheet: the revision's template tiled at the order's girth, then the cut
-// list, hardware, punches, the steps to tick and the cautions (the print module's job sheet),
-// with the order and its girth on the title block and its number and due date on every
-// footer. Each print is logged on the order (who, when, which paper).
+// The order's job sheet: the revision's template tiled at the order's girth, then the order's
+// own section (job-sheet-order.ts), the cut list, hardware, punches, the steps to tick and the
+// cautions (the print module's job sheet), with the order and its girth on the title block and
+// its number and due date on every footer. Each print is logged on the order (who, when, which paper).
 import type { Knex } from 'knex';
 import { formatLength } from '@shared/units/format-length.ts';
 import { writeTransaction } from '../../db/write-transaction.ts';
 import { HttpError } from '../../http/http-error.ts';
 import type { AuthContext } from '../../http/session.ts';
 import { printErrorToHttp, printRevision, type PaperId, type PrintedFile } from '../print/index.ts';
-import { fittedOf } from './order-view.ts';
+import { jobSheetOrderSection } from './job-sheet-order.ts';
+import { fittedOf, priceContext, priceOf } from './order-view.ts';
 import type { ListedOrderRow, OrdersRepository } from './orders.repository.ts';
 
 export async function printJobSheet(db: Knex, orders: OrdersRepository, now: () => number, auth: AuthContext, row: ListedOrderRow, paper: Exclude<PaperId, 'custom'>): Promise<PrintedFile> {
@@ -18,6 +19,7 @@ export async function printJobSheet(db: Knex, orders: OrdersRepository, now: () 
   const order = `Order ${row.number}`;
   // Short: it shares the one footer line of every page with the cautions, which must stay whole.
   const footer = `${order} · due ${row.due_date}`;
+  const price = priceOf(row, fitted, await priceContext(db, row.shop_id));
   let file: PrintedFile;
   try {
     file = await printRevision(
@@ -30,6 +32,7 @@ export async function printJobSheet(db: Knex, orders: OrdersRepository, now: () 
         sizes: [],
         revisionNote: `${order} at ${girth} girth${row.size_name ? ` (size ${row.size_name})` : ''}`,
         footerNote: footer,
+        jobSheetOrder: jobSheetOrderSection(row, price),
       },
       'pdf',
     );

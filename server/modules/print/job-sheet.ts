@@ -11,6 +11,8 @@ export interface JobSheet {
   steps: string[];
   cautions: string[];
   warnings?: string[];
+  /** An order's own lines (who for, quantity, leather colour and finish, thread, notes), first. */
+  order?: { heading: string; lines: string[] };
 }
 
 /** Breaks text into lines no wider than `widthMm` at a style. */
@@ -28,26 +30,46 @@ export function wrapText(doc: PDFKit.PDFDocument, text: string, widthMm: number,
   return lines;
 }
 
-/** Draws the job sheet on the current page (portrait sheet, margins in mm). */
+/** Type never shrinks below this share of its size to fit the page (still readable at the bench). */
+const MIN_SCALE = 0.7;
+
+/**
+ * Draws the job sheet on the current page (portrait sheet, margins in mm). One page by design:
+ * when the lists (a long cut list, an order's notes) would run past the foot, the type and
+ * line gaps shrink together until everything fits, so the cautions printed last are never lost.
+ */
 export function drawJobSheet(doc: PDFKit.PDFDocument, js: JobSheet, title: TitleBlock, page: { widthMm: number; heightMm: number; marginMm: number }): void {
+  const bottom = page.heightMm - page.marginMm - 4;
+  let scale = 1;
+  while (scale > MIN_SCALE && layOut(doc, js, title, page, scale, false) > bottom) scale = Math.max(MIN_SCALE, scale - 0.05);
+  layOut(doc, js, title, page, scale, true);
+}
+
+/** Sets the sheet at a type scale (drawing only when `draw`); returns where the text ended, mm. */
+function layOut(doc: PDFKit.PDFDocument, js: JobSheet, title: TitleBlock, page: { widthMm: number; heightMm: number; marginMm: number }, scale: number, draw: boolean): number {
   const left = page.marginMm + 4;
   const width = page.widthMm - 2 * left;
   const bottom = page.heightMm - page.marginMm - 4;
   let y = page.marginMm + 10;
+  const sized = (s: TextStyle): TextStyle => ({ ...s, capMm: s.capMm * scale });
   const body: TextStyle = { capMm: 2.3 };
   const line = (text: string, style: TextStyle = body, indent = 0, gap = 4.4): void => {
-    for (const l of wrapText(doc, text, width - indent, style)) {
-      if (y > bottom) return; // one page by design: the lists are short; never spill silently past the edge
-      textMm(doc, l, left + indent, y, style);
-      y += gap;
+    for (const l of wrapText(doc, text, width - indent, sized(style))) {
+      // Past the foot only at the smallest type: never spill silently past the edge.
+      if (draw && y <= bottom) textMm(doc, l, left + indent, y, sized(style));
+      y += gap * scale;
     }
   };
   const heading = (text: string): void => {
-    y += 2.5;
+    y += 2.5 * scale;
     line(text, { capMm: 3, weight: 'bold' }, 0, 6);
   };
   line(`Job sheet · ${title.pattern}`, { capMm: 4.5, weight: 'bold' }, 0, 7);
   line([title.revision, title.size, `girth ${title.girth}`, `width ${title.width}`, title.leather, title.date].filter(Boolean).join(' · '), { capMm: 2.3, color: '#444444' });
+  if (js.order?.lines.length) {
+    heading(js.order.heading);
+    for (const o of js.order.lines) line(o);
+  }
   heading('Cut list');
   for (const c of js.cutList) line(`${c.qty} x ${c.piece}: ${c.blank}${c.note ? ` (${c.note})` : ''}`);
   if (js.hardware.length) {
@@ -63,17 +85,19 @@ export function drawJobSheet(doc: PDFKit.PDFDocument, js: JobSheet, title: Title
     for (const p of js.punches) line(`${p.count} x ${p.what}: ${p.size}`);
   }
   heading('Steps');
-  doc.save().lineWidth(mmToPt(0.25)).strokeColor('#000000').undash();
+  if (draw) doc.save().lineWidth(mmToPt(0.25)).strokeColor('#000000').undash();
   for (const s of js.steps) {
-    const box = 2.6;
-    if (y <= bottom) doc.rect(mmToPt(left), mmToPt(y - box), mmToPt(box), mmToPt(box)).stroke();
-    line(s, body, box + 2.5);
+    const box = 2.6 * scale;
+    if (draw && y <= bottom) doc.rect(mmToPt(left), mmToPt(y - box), mmToPt(box), mmToPt(box)).stroke();
+    line(s, body, box + 2.5 * scale);
   }
-  doc.restore();
+  if (draw) doc.restore();
   if (js.warnings?.length) {
     heading('Warnings');
     for (const w of js.warnings) line(w);
   }
   heading('Cautions');
   for (const c of js.cautions) line(c, { capMm: 2.1 });
+  // y is the next baseline; the last line drawn sat one gap above it.
+  return y - 4.4 * scale;
 }

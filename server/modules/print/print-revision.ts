@@ -45,7 +45,7 @@ export async function printRevisionInline(
     date: revisionDate(meta.date).date,
     kind: spec.kind,
     ...(meta.footerNote ? { footerNote: meta.footerNote } : {}),
-    ...(opts.jobSheet ? { jobSheet: jobSheetFromRun(layouts) } : {}),
+    ...(opts.jobSheet ? { jobSheet: { ...jobSheetFromRun(layouts), ...(meta.jobSheetOrder ? { order: meta.jobSheetOrder } : {}) } } : {}),
     onProgress: (done, total) => onProgress?.({ stage: 'pages', done, total }),
   });
   return { body, fileName, contentType };

@@ -15,6 +15,8 @@ export interface RevisionMeta {
   revisionNote?: string;
   /** Printed first on every page's footer line, e.g. that the values are not saved. */
   footerNote?: string;
+  /** An order's section at the top of the job sheet (plain data: it crosses to the print worker). */
+  jobSheetOrder?: { heading: string; lines: string[] };
 }
 
 /** The date as a Date and as the title block's "YYYY-MM-DD". */
