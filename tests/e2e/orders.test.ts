@@ -239,6 +239,12 @@ describe('an order from a measurement to a finished piece, in the browser', () =
     await p.getByTestId('proof-photos').getByRole('img', { name: 'Blank cut from the chestnut bridle' }).waitFor();
     await snapAll(p, '08-proof');
     await p.getByLabel('Your name').fill(customer.name);
+    // Asking for a change needs words: the shared schema's message, by the field's label.
+    await p.getByRole('button', { name: 'Ask for a change' }).click();
+    await p.getByRole('button', { name: 'Send change request' }).click();
+    await p.getByText('What should change is required').waitFor();
+    await snap(p, 'orders-08a-proof-change-refused');
+    await p.getByRole('button', { name: 'Back' }).click();
     await p.getByRole('button', { name: 'Approve' }).click();
     await p.getByText('Approved: thank you').waitFor();
     await snap(p, 'orders-09-proof-approved');

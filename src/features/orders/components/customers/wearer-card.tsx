@@ -48,7 +48,7 @@ export function WearerCard({ wearer, newOrderHref, canMeasure, canOrder }: { wea
               />
             ))}
             <div className="overflow-x-auto">
-              <table className="w-full min-w-[28rem] text-left text-sm">
+              <table className="w-full text-left text-sm">
                 <caption className="sr-only">Measurements of {wearer.name}, oldest first</caption>
                 <thead className="text-xs uppercase tracking-wide text-hide-600">
                   <tr>
@@ -61,7 +61,7 @@ export function WearerCard({ wearer, newOrderHref, canMeasure, canOrder }: { wea
                 <tbody className="divide-y divide-hide-100">
                   {wearer.measurements.map((m) => (
                     <tr key={m.id}>
-                      <td className="whitespace-nowrap py-1 pr-3">{formatWhen(m.takenAt)}</td>
+                      <td className="py-1 pr-3">{formatWhen(m.takenAt)}</td>
                       <td className="whitespace-nowrap py-1 pr-3 font-medium tabular-nums">{formatGirth(m.girthMm, m.unit)}</td>
                       <td className="py-1 pr-3">
                         {BODY_PART_LABELS[m.part]}, {MEASURE_METHOD_LABELS[m.method].toLowerCase()}
