@@ -310,6 +310,19 @@ describe('an order from a measurement to a finished piece, in the browser', () =
     await snapAll(page, '13-customer');
   });
 
+  it('when the apprentice starts a new order from the wearer, then the latest neck measurement (15 in) is offered and the order is made at it', async () => {
+    await page.getByRole('link', { name: 'New order' }).first().click();
+    await page.getByRole('heading', { name: 'New order' }).waitFor();
+    await page.getByLabel('Pattern').selectOption({ label: 'Shop collar, 1 in bridle' });
+    const latest = page.getByLabel('The wearer’s latest neck measurement');
+    await latest.check();
+    await expect(page.getByText('15 in,').first().isVisible()).resolves.toBe(true);
+    await page.getByRole('button', { name: 'Create order' }).click();
+    await page.getByRole('heading', { name: /^Order \d+$/ }).waitFor();
+    await expect(page.getByTestId('order-girth').textContent()).resolves.toContain('15 in');
+    await expect(page.getByTestId('order-stage').textContent()).resolves.not.toBe('Waiting for measurement');
+  });
+
   it('when a maker and the owner open the orders, then both may move orders and only the owner sees Pricing', async () => {
     // The customer's browser is done with its links; a maker joins in it.
     const maker = { name: 'Tobias Harrow', email: 'tobias.orders@harrowfinch.example', password: 'bridle butt and edge kote' };
