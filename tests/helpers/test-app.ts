@@ -49,7 +49,8 @@ export async function createTestApp(options: TestAppOptions = {}): Promise<TestA
   const env = { NODE_ENV: 'test', DATABASE_FILE: file, ...(pg ? { DATABASE_URL: pg.url } : {}), PORT: '0', ...options.env };
   const config = { ...loadConfig(env), ...options.config };
   const db = openDb(pg ? pg.url : file);
-  await migrateLatest(db);
+  // A PostgreSQL test database is a copy of the template the run migrated at its start.
+  if (!pg || !process.env.LATCHET_TEST_PG_TEMPLATE) await migrateLatest(db);
   const errors: unknown[] = [];
   const smtp = await startFakeSmtp();
   const transport = nodemailer.createTransport({ host: '127.0.0.1', port: smtp.port, secure: false, ignoreTLS: true });

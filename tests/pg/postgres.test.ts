@@ -109,3 +109,11 @@ describe('migrations', () => {
     expect(await t.db('shops').count({ n: '*' }).first()).toEqual({ n: 1 });
   });
 });
+
+describe('test databases', () => {
+  it('when earlier tests of this file wrote shops, then this test still starts empty and ids start again at 1', async () => {
+    expect(await t.db('shops').count({ n: '*' }).first()).toEqual({ n: 0 });
+    const [shop] = await t.db('shops').insert({ name: 'Juniper Goods', created_at: 1 }).returning<{ id: number }[]>('id');
+    expect(shop!.id).toBe(1);
+  });
+});
