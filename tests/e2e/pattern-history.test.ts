@@ -54,7 +54,9 @@ describe('pattern history and sharing in the browser', () => {
     await page.getByRole('link', { name: 'Changes from 1' }).click();
     const params = page.getByTestId('compare-params');
     await params.waitFor();
-    const row = params.locator('tr', { hasText: 'girthMm' });
+    // Compare names the field as the form labels it, never the schema's name (girthMm).
+    const row = params.locator('tr').filter({ has: page.getByRole('rowheader', { name: 'Girth', exact: true }) });
+    expect(await params.textContent()).not.toContain('girthMm');
     await expect(row.locator('td').allTextContents()).resolves.toEqual(['34 in', '36 in']);
     // Belt size = bar to middle hole = waist + 2 in (common practice): the holes move by the waist change.
     await expect(page.getByTestId('compare-moved').first().textContent()).resolves.toContain('+2 in');

@@ -73,29 +73,32 @@ export function StandardsForm({ view, canEdit, kindLabels }: StandardsFormProps)
 
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Shop standards" className="grid gap-6">
-      <fieldset disabled={disabled} className="contents">
-        <Panel title="What new patterns start from">
-          <div className="grid gap-4">
-            <p className="text-sm text-hide-700">
-              Each kind of strap starts from these values when a maker makes a new pattern. A maker can still change any of them in the pattern.
-            </p>
-            <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
-              <SelectField label="Kind of strap" value={kind} onChange={(e) => setKind(e.target.value as PresetName)} disabled={false}>
-                {PRESET_NAMES.map((k) => (
-                  <option key={k} value={k}>
-                    {kindLabels[k]}
-                    {formState.errors.kinds?.[k] ? ' (needs a look)' : ''}
-                  </option>
-                ))}
-              </SelectField>
-              <SelectField label="Show lengths in" value={unit} disabled={disabled} onChange={(e) => setValue('units', e.target.value as 'in' | 'mm', { shouldDirty: true })}>
-                <option value="in">Inches</option>
-                <option value="mm">Millimetres</option>
-              </SelectField>
-            </div>
-            <KindStandardFields key={kind} control={control} kind={kind} unit={unit} hardware={hardware as ShopStandards['hardware']} disabled={disabled} />
+      <Panel title="What new patterns start from">
+        <div className="grid gap-4">
+          <p className="text-sm text-hide-700">
+            Each kind of strap starts from these values when a maker makes a new pattern. A maker can still change any of them in the pattern.
+          </p>
+          <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
+            <SelectField label="Kind of strap" value={kind} onChange={(e) => setKind(e.target.value as PresetName)}>
+              {PRESET_NAMES.map((k) => (
+                <option key={k} value={k}>
+                  {kindLabels[k]}
+                  {formState.errors.kinds?.[k] ? ' (needs a look)' : ''}
+                </option>
+              ))}
+            </SelectField>
+            <SelectField label="Show lengths in" value={unit} onChange={(e) => setValue('units', e.target.value as 'in' | 'mm', { shouldDirty: canEdit })}>
+              <option value="in">Inches</option>
+              <option value="mm">Millimetres</option>
+            </SelectField>
           </div>
-        </Panel>
+          {/* Readers switch kinds and units to read; only the values below are locked for them. */}
+          <fieldset disabled={disabled} className="contents">
+            <KindStandardFields key={kind} control={control} kind={kind} unit={unit} hardware={hardware as ShopStandards['hardware']} disabled={disabled} />
+          </fieldset>
+        </div>
+      </Panel>
+      <fieldset disabled={disabled} className="contents">
         <Panel title="Hardware the shop stocks">
           <HardwareList control={control} unit={unit} disabled={disabled} onRemoved={onRemovedHardware} />
         </Panel>
@@ -103,7 +106,7 @@ export function StandardsForm({ view, canEdit, kindLabels }: StandardsFormProps)
           <PunchList control={control} disabled={disabled} />
         </Panel>
       </fieldset>
-      <div className="sticky bottom-0 z-10 -mx-1 grid gap-2 rounded-lg border border-hide-200 bg-paper/95 px-4 py-3 shadow-md backdrop-blur">
+      <div className={canEdit ? 'sticky bottom-0 z-10 -mx-1 grid gap-2 rounded-lg border border-hide-200 bg-paper/95 px-4 py-3 shadow-md backdrop-blur' : 'grid gap-2 px-1'}>
         {notice && (
           <Notice tone={notice.tone} role={notice.tone === 'danger' ? 'alert' : 'status'}>
             {notice.text}

@@ -50,7 +50,7 @@ export function Component() {
           onCompare={(a, b) => navigate(paths.patterns.compare.getHref(id, a, b))}
         />
       </Panel>
-      <CompareView comparison={comparison} unit={unit} />
+      <CompareView comparison={comparison} unit={unit} spec={detail.head.spec} />
     </div>
   );
 }

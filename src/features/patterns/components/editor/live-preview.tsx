@@ -10,7 +10,7 @@ import { useLiveDraft, type LiveDraft } from './use-live-draft.ts';
 
 /**
  * What the engine says of the form's values beyond the drawing: the size run, warnings, the
- * fit at each hole, rule against fit, and the cut list. The drawing and the summary live on
+ * fit at each hole, the shop rule beside the fitted length, and the cut list. The drawing and the summary live on
  * the bench card above ({@link BenchCard}).
  */
 export function PreviewDetails({ live }: { live: LiveDraft }) {
@@ -40,7 +40,7 @@ export function PreviewDetails({ live }: { live: LiveDraft }) {
         </Panel>
       )}
       <div className="grid gap-4 xl:grid-cols-2">
-        <Panel title="Rule against fit">
+        <Panel title="Shop rule and fitted length">
           <RuleVsFitPanel value={layout.ruleVsFit} mode={layout.mode} unit={unit} />
         </Panel>
         <Panel title="Cut list">

@@ -1,15 +1,22 @@
 import { formatLength } from '@shared/units/format-length.ts';
 import type { LengthUnit } from '@shared/units/length.ts';
+import { specLabel } from '@shared/schemas/spec-labels.ts';
+import { choiceWords } from '@shared/schemas/spec-messages.ts';
 import { Notice } from '@/components/ui/notice.tsx';
 import { Panel } from '@/components/ui/panel.tsx';
 import type { Comparison, ParamChange } from '@shared/schemas/library-views.ts';
 
-function value(v: unknown, unit: string | null, display: LengthUnit): string {
-  if (typeof v === 'number' && unit === 'mm') return formatLength(v, display);
-  if (typeof v === 'number') return `${Math.round(v * 1000) / 1000}${unit ? ` ${unit}` : ''}`;
+/** A changed value as the form shows it: lengths in the display unit, choices in words, holes from 1. */
+function value(p: ParamChange, v: unknown, display: LengthUnit): string {
   if (v === null || v === undefined) return '—';
-  if (typeof v === 'string' || typeof v === 'boolean') return String(v);
-  return JSON.stringify(v);
+  if (typeof v === 'number' && p.unit === 'mm') return formatLength(v, display);
+  // Hole numbers are stored from 0 and read from 1 (the drawings and PDFs number them so).
+  if (typeof v === 'number' && p.path.endsWith('nominalIndex')) return String(v + 1); // older specs
+  if (typeof v === 'number') return `${Math.round(v * 1000) / 1000}${p.unit ? ` ${p.unit}` : ''}`;
+  if (typeof v === 'boolean') return v ? 'yes' : 'no';
+  if (typeof v === 'string') return p.path.endsWith('name') ? v : choiceWords(v);
+  if (Array.isArray(v)) return v.length === 0 ? 'none' : `${v.length}`;
+  return '—';
 }
 
 function signed(mm: number, unit: LengthUnit): string {
@@ -17,15 +24,12 @@ function signed(mm: number, unit: LengthUnit): string {
   return `${mm > 0 ? '+' : '−'}${formatLength(Math.abs(mm), unit)}`;
 }
 
-/** "pieces.0.end.holes.count" -> "pieces › 0 › end › holes › count", readable without hiding the path. */
-const readablePath = (p: ParamChange['path']) => p.split('.').join(' › ');
-
 /** What changed between two revisions: the values typed, and where the features moved. */
-export function CompareView({ comparison, unit }: { comparison: Comparison; unit: LengthUnit }) {
+export function CompareView({ comparison, unit, spec }: { comparison: Comparison; unit: LengthUnit; /** Names the pieces in the labels (the newer revision's spec). */ spec?: unknown }) {
   const { params, layout } = comparison;
   return (
     <div className="grid gap-4">
-      <Panel title={`Changed values (${params.length})`}>
+      <Panel title={`Changed values (${params.length})`} aside={<span className="text-xs text-hide-600">Lengths in {unit === 'in' ? 'inches' : 'millimetres'}</span>}>
         {params.length === 0 ? (
           <p className="text-sm text-hide-600">The two revisions hold the same spec.</p>
         ) : (
@@ -40,9 +44,9 @@ export function CompareView({ comparison, unit }: { comparison: Comparison; unit
             <tbody>
               {params.map((p) => (
                 <tr key={p.path} className="border-b border-hide-100">
-                  <th scope="row" className="py-1.5 pr-3 text-left font-mono text-xs font-normal text-hide-800">{readablePath(p.path)}</th>
-                  <td className="py-1.5 pr-3 text-hide-700">{value(p.from, p.unit, unit)}</td>
-                  <td className="py-1.5 font-semibold text-hide-900">{value(p.to, p.unit, unit)}</td>
+                  <th scope="row" className="py-1.5 pr-3 text-left font-normal text-hide-800">{specLabel(p.path, spec)}</th>
+                  <td className="py-1.5 pr-3 text-hide-700">{value(p, p.from, unit)}</td>
+                  <td className="py-1.5 font-semibold text-hide-900">{value(p, p.to, unit)}</td>
                 </tr>
               ))}
             </tbody>
@@ -69,7 +73,7 @@ export function CompareView({ comparison, unit }: { comparison: Comparison; unit
                 <ul className="mt-1 space-y-0.5" data-testid="compare-moved">
                   {piece.moved.map((m, i) => (
                     <li key={`${m.label}-${i}`}>
-                      {m.label}: {formatLength(m.from.atMm, unit)} → {formatLength(m.to.atMm, unit)} from the datum ({signed(m.deltaAtMm, unit)})
+                      {m.label}: {formatLength(m.from.atMm, unit)} → {formatLength(m.to.atMm, unit)} from the buckle end ({signed(m.deltaAtMm, unit)})
                     </li>
                   ))}
                 </ul>
