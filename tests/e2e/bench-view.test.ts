@@ -135,7 +135,7 @@ describe('the bench view', () => {
     await page.setViewportSize(SIZES.desktop);
   });
 
-  it('when the drawing is zoomed with keys, the wheel and the buttons, then its scale grows and shrinks and 0 fits it again', async () => {
+  it('when the drawing is zoomed with keys, the wheel, the buttons and a two-finger pinch, then its scale follows and 0 fits it again', async () => {
     await page.setViewportSize(SIZES.desktop);
     await openPattern();
     const drawing = page.getByTestId('drawing-preview');
@@ -154,6 +154,20 @@ describe('the bench view', () => {
     await page.keyboard.press('0');
     await expect.poll(() => drawing.getAttribute('data-mode')).toBe('fit');
     expect(await scale()).toBeCloseTo(fitted, 6);
+
+    // Pinch: two touch points moving apart from 100 px to 200 px (Chromium turns the touches
+    // into pointer events, which the drawing reads) double the scale.
+    const cdp = await page.context().newCDPSession(page);
+    await cdp.send('Emulation.setTouchEmulationEnabled', { enabled: true, maxTouchPoints: 2 });
+    const cx = box.x + box.width / 2;
+    const cy = box.y + box.height / 2;
+    const touch = (type: 'touchStart' | 'touchMove' | 'touchEnd', half: number) =>
+      cdp.send('Input.dispatchTouchEvent', { type, touchPoints: type === 'touchEnd' ? [] : [{ x: cx - half, y: cy, id: 1 }, { x: cx + half, y: cy, id: 2 }] });
+    await touch('touchStart', 50);
+    for (const half of [60, 70, 80, 90, 100]) await touch('touchMove', half);
+    await touch('touchEnd', 100);
+    await expect.poll(scale).toBeCloseTo(fitted * 2, 3);
+    await cdp.send('Emulation.setTouchEmulationEnabled', { enabled: false });
   });
 
   it('when the screen is calibrated with a card, then true size draws 25.4 mm as 25.4 x the stored px per mm', async () => {
