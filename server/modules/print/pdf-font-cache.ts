@@ -7,6 +7,8 @@
 /** The parts of a fontkit font these caches wrap (fontkit 2, as pdfkit 0.20 uses it). */
 export interface CacheableFont {
   layout: (text: string, ...rest: unknown[]) => unknown;
+  /** fontkit's glyph objects by id; a glyph keeps the characters it was first made for. */
+  _glyphs?: Record<number, unknown>;
   createSubset: () => { glyphs: number[]; encode: () => Uint8Array };
 }
 
@@ -38,7 +40,16 @@ function cacheLayouts(font: CacheableFont): void {
     if (rest.some((r) => r !== undefined)) return layout(text, ...rest);
     const hit = runs.get(text);
     if (hit) return copyRun(hit);
-    const run = layout(text) as Run;
+    // Shaped with an empty glyph cache, so the glyphs carry this word's own characters (the
+    // ToUnicode map reads them) whatever was printed before: same input, same bytes.
+    const glyphs = font._glyphs;
+    font._glyphs = {};
+    let run: Run;
+    try {
+      run = layout(text) as Run;
+    } finally {
+      font._glyphs = glyphs;
+    }
     if (runs.size >= MAX_WORDS) runs.clear();
     runs.set(text, copyRun(run));
     return run;
