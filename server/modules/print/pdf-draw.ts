@@ -37,15 +37,30 @@ export function circlePt(doc: PDFKit.PDFDocument, cx: number, cy: number, r: num
   doc.closePath();
 }
 
-function strokeLayer(doc: PDFKit.PDFDocument, layer: LayerName, dashed: boolean): void {
+/**
+ * The stroke style last set inside one placement (`key` is layer + dash), so a run of items on
+ * one layer sets width, colour, join, cap and dash once instead of before every stroke: those
+ * operators were about half of a page's content stream. Only strokes happen between items
+ * (text saves and restores the graphics state round itself), so the style stays in force.
+ */
+interface StrokeState {
+  key: string | null;
+}
+
+function strokeLayer(doc: PDFKit.PDFDocument, layer: LayerName, dashed: boolean, state: StrokeState): void {
   const s = LAYER_STROKE[layer];
-  doc.lineWidth(mmToPt(s.widthMm)).strokeColor(s.color).lineJoin('round').lineCap('butt');
-  if (dashed && s.dashMm) doc.dash(mmToPt(s.dashMm[0]), { space: mmToPt(s.dashMm[1]) });
-  else doc.undash();
+  const dash = dashed && s.dashMm !== undefined;
+  const key = `${layer}${dash ? '-dashed' : ''}`;
+  if (state.key !== key) {
+    doc.lineWidth(mmToPt(s.widthMm)).strokeColor(s.color).lineJoin('round').lineCap('butt');
+    if (dash && s.dashMm) doc.dash(mmToPt(s.dashMm[0]), { space: mmToPt(s.dashMm[1]) });
+    else doc.undash();
+    state.key = key;
+  }
   doc.stroke();
 }
 
-function drawItem(doc: PDFKit.PDFDocument, item: DrawingItem, ox: number, oy: number): void {
+function drawItem(doc: PDFKit.PDFDocument, item: DrawingItem, ox: number, oy: number, state: StrokeState): void {
   const map = (x: number, y: number): [number, number] => [mmToPt(x + ox), mmToPt(y + oy)];
   if (item.type === 'text') {
     // sizeMm is the em, as SVG's font-size (the Drawing contract), so print and preview match.
@@ -60,11 +75,11 @@ function drawItem(doc: PDFKit.PDFDocument, item: DrawingItem, ox: number, oy: nu
   if (item.type === 'circle') {
     const [cx, cy] = map(item.cx, item.cy);
     circlePt(doc, cx, cy, mmToPt(item.r));
-    strokeLayer(doc, item.layer, false);
+    strokeLayer(doc, item.layer, false, state);
     return;
   }
   replayPath(item.commands, pdfSink(doc), map);
-  strokeLayer(doc, item.layer, item.dashed === true);
+  strokeLayer(doc, item.layer, item.dashed === true, state);
 }
 
 /** Along-strap extent of an item, mm, generous for text (used only to skip what a tile cannot show). */
@@ -108,8 +123,9 @@ export function drawPlacement(doc: PDFKit.PDFDocument, piece: DrawingPiece, pl: 
     const [lo, hi] = itemSpanX(item);
     return hi >= pl.fromXMm - 1 && lo <= pl.toXMm + 1;
   });
+  const state: StrokeState = { key: null };
   for (const layer of layerOrder) {
-    for (const item of visible) if (item.layer === layer) drawItem(doc, item, pl.offsetXMm, pl.offsetYMm);
+    for (const item of visible) if (item.layer === layer) drawItem(doc, item, pl.offsetXMm, pl.offsetYMm, state);
   }
   doc.restore();
 }
