@@ -4,7 +4,7 @@
 // 1 in check square in Chromium's PDF at 1200 dpi to report whether Chromium kept 1:1, and
 // checks that printing the same input twice gives the same bytes.
 import { execFileSync } from 'node:child_process';
-import { mkdirSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { chromium } from 'playwright-core';
 import { presetSpec, type StrapSpec } from '@shared/pattern/index.ts';
@@ -75,12 +75,47 @@ function squareSideMm(pdfPath: string): number {
   return (centres / dpi) * 25.4;
 }
 
+/** CPU time (ms) used so far by the process `root` and all its descendants, from /proc (Linux, 10 ms ticks). */
+function treeCpuMs(root: number): number {
+  const stats = new Map<number, { ppid: number; ticks: number }>();
+  for (const d of readdirSync('/proc')) {
+    if (!/^\d+$/.test(d)) continue;
+    try {
+      // Fields after the command name: state ppid ... utime (14) stime (15), counted from pid = 1.
+      const f = readFileSync(`/proc/${d}/stat`, 'utf8').replace(/^.*\) /, '').split(' ');
+      stats.set(Number(d), { ppid: Number(f[1]), ticks: Number(f[11]) + Number(f[12]) });
+    } catch {
+      // the process ended meanwhile
+    }
+  }
+  let ticks = 0;
+  for (const [pid, st] of stats) {
+    for (let p: number | undefined = pid; p !== undefined && p > 1; p = stats.get(p)?.ppid) {
+      if (p === root) {
+        ticks += st.ticks;
+        break;
+      }
+    }
+  }
+  return ticks * 10; // USER_HZ is 100 on Linux
+}
+
+/** CPU ms per run of `fn`: this process alone, or with `tree` this process and its children (Chromium). */
+async function cpuMsPerRun(fn: () => Promise<unknown>, tree = false): Promise<number> {
+  const c0 = process.cpuUsage();
+  const t0 = tree ? treeCpuMs(process.pid) : 0;
+  for (let i = 0; i < RUNS; i++) await fn();
+  const c = process.cpuUsage(c0);
+  return (tree ? treeCpuMs(process.pid) - t0 : (c.user + c.system) / 1000) / RUNS;
+}
+
 const browser = await chromium.launch({
   executablePath: '/usr/bin/chromium',
   args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic', '--disable-dev-shm-usage'],
 });
 try {
   const page = await browser.newPage();
+  const cpuRows: { name: string; ours: number; chrome: number; targetX: number }[] = [];
   console.log('case                    ours ms   chromium ms   ours/chromium   x faster (target)   ours pages   same bytes   chromium 1 in square');
   for (const c of CASES) {
     const opts = { paper: 'letter' as const, ...(c.size ? { size: c.size } : {}) };
@@ -102,6 +137,9 @@ try {
     const chromePath = join(OUT, `${c.name.replace(/\W+/g, '-')}-chromium.pdf`);
     writeFileSync(chromePath, chromePdf);
     const chromeMs = await medianMs(viaChromium, RUNS, WARM);
+    const oursCpu = await cpuMsPerRun(() => printRevisionInline(c.spec, opts, c.meta));
+    const chromeCpu = await cpuMsPerRun(viaChromium, true);
+    cpuRows.push({ name: c.name, ours: oursCpu, chrome: chromeCpu, targetX: c.targetX });
     const side = squareSideMm(chromePath);
     const pages = (ours.body.toString('latin1').match(/\/Type \/Page\b/g) ?? []).length;
     const keeps = Math.abs(side - 25.4) / 25.4 < 0.001 ? 'kept 1:1' : 'NOT 1:1';
@@ -111,6 +149,13 @@ try {
     );
   }
   console.log(`\nmedian wall time of ${RUNS} runs after ${WARM} warm-ups; Chromium writes one sheet the size of the SVG (no tiling, no page furniture).`);
+  // On a busy machine the wall clock favours Chromium's several processes over our one thread;
+  // CPU time (ours: this process; Chromium: all its processes plus this driver) compares the work.
+  console.log('\nCPU time per PDF               ours ms   chromium ms   x less CPU (target)');
+  for (const r of cpuRows) {
+    const x = r.chrome / r.ours;
+    console.log(`${r.name.padEnd(22)} ${r.ours.toFixed(1).padStart(14)}   ${r.chrome.toFixed(1).padStart(11)}   ${`${x.toFixed(2)} (${r.targetX}) ${verdict(x >= r.targetX)}`.padStart(19)}`);
+  }
 } finally {
   await browser.close();
 }
