@@ -72,8 +72,21 @@ export function pieceWarnings(spec: StrapSpec, piece: PieceLayout, profile: Widt
   return out;
 }
 
-/** How much tighter than the measure a collar may close at its nominal hole before a warning, mm. */
-export const COLLAR_TIGHT_SLACK_MM = 3;
+/**
+ * What two fingers laid flat under the tape add to a neck measure: about 1 in (common
+ * practice: a collar fits when two fingers slip under it, and collars are measured that way).
+ */
+export const TWO_FINGER_ROOM_MM = 25.4;
+
+/**
+ * The bare neck under a collar, mm: the girth measured snug, or the two-finger measure less
+ * the fingers' room. Our rule: at its middle hole a collar must not close tighter than this.
+ * The trade's rule-mode collar (blank = loose neck + 8 in, common practice) closes about
+ * 3/4 in under the loose measure, 1/4 in over the bare neck: it passes; anything tighter warns.
+ */
+export function bareNeckMm(spec: Pick<StrapSpec, 'girthMm' | 'girthMeasured'>): number {
+  return spec.girthMeasured === 'two-fingers' ? spec.girthMm - TWO_FINGER_ROOM_MM : spec.girthMm;
+}
 
 /** Pattern-level warnings: tail, fit range, D-rings, strip length, tip through the buckle. */
 export function patternWarnings(spec: StrapSpec, strap: PieceLayout, fit: FitReport, strapProfile: WidthProfile, t: number, keeperWidthMm: number): Warning[] {
@@ -96,15 +109,21 @@ export function patternWarnings(spec: StrapSpec, strap: PieceLayout, fit: FitRep
   const tol = spec.pieces.some((p) => p.end.kind === 'adjustable') ? 1e-6 : 3;
   if (fit.targetMm < lo - tol || fit.targetMm > hi + tol)
     add('fit-misses-target', `target ${formatLength(fit.targetMm, u)} lies outside the fit range ${formatLength(lo, u)} to ${formatLength(hi, u)} (${spec.mode} mode)`, strap.id);
-  // A collar must not close tighter than the neck was measured at the hole it is meant to be
-  // worn on: the maker checks with two fingers under it (common practice) before trusting it.
-  const nominalFit = fit.holes[fit.nominalIndex];
-  if (spec.kind === 'collar' && spec.closes && nominalFit && nominalFit.innerMm < fit.targetMm - COLLAR_TIGHT_SLACK_MM)
+  // A collar must not close tighter than the bare neck at the hole it is meant to be worn on
+  // (bareNeckMm); the maker still checks with two fingers under it (common practice).
+  const middle = fit.holes[fit.nominalIndex];
+  const bare = bareNeckMm(spec);
+  if (spec.kind === 'collar' && spec.closes && middle && middle.innerMm < bare - 1e-6) {
+    const how =
+      spec.girthMeasured === 'two-fingers'
+        ? `the bare neck (about ${formatLength(bare, u)}: the ${formatLength(spec.girthMm, u)} measured over two fingers, less ${formatLength(TWO_FINGER_ROOM_MM, u)} for the fingers)`
+        : `the ${formatLength(bare, u)} neck measured snug`;
     add(
       'collar-tight-at-nominal',
-      `at the nominal hole the collar is ${formatLength(nominalFit.innerMm, u)} inside, ${formatLength(fit.targetMm - nominalFit.innerMm, u)} tighter than the ${formatLength(fit.targetMm, u)} measured: check that two fingers slip under it before relying on that hole, or use fit mode`,
+      `at the middle hole (hole ${fit.nominalIndex + 1}) the collar is ${formatLength(middle.innerMm, u)} inside, ${formatLength(bare - middle.innerMm, u)} tighter than ${how}: it will choke. Lengthen the blank, or let the length come from the measure (fit mode)`,
       strap.id,
     );
+  }
   const dr = spec.hardware.dRings;
   if (dr.count > 0 && (strapProfile.startWidthMm > dr.insideWidthMm + HARDWARE_SLACK_MM.over || strapProfile.startWidthMm < dr.insideWidthMm - HARDWARE_SLACK_MM.under))
     add('width-hardware-mismatch', `width ${formatLength(strapProfile.startWidthMm, u)} does not match the D-rings' ${formatLength(dr.insideWidthMm, u)} inside width`, strap.id);

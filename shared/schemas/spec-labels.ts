@@ -24,6 +24,7 @@ const TOP: Record<string, FieldLabel> = {
   units: f('Show lengths in', 'choice'),
   mode: f('Length from', 'choice'),
   girthMm: f('Girth', 'length'),
+  girthMeasured: f('Girth measured', 'choice'),
   easeMm: f('Ease', 'length'),
   closes: f('Fastens round the body', 'yes-no'),
   widthMm: f('Strap width', 'length'),

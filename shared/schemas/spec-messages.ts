@@ -43,6 +43,8 @@ const CHOICE_WORDS: Record<string, string> = {
   'fold-over': 'folded round a bar',
   'fold-back': 'folded back into a loop',
   adjustable: 'adjustment holes',
+  snug: 'snug on the body',
+  'two-fingers': 'loose over two fingers',
 };
 
 /** A choice value as words: "fold-over" -> "folded round a bar", "in" -> "inches". */

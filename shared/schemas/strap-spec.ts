@@ -3,6 +3,9 @@ import * as L from './strap-spec-limits.ts';
 
 export * from './strap-spec-limits.ts';
 
+/** How a girth was measured: tape snug on the body, or loose over two fingers laid flat. */
+export const GIRTH_MEASURED = ['snug', 'two-fingers'] as const;
+
 /** Strap kinds with a preset (see shared/pattern/presets). */
 export const PRESET_NAMES = ['collar', 'belt', 'watch-strap', 'bag-strap', 'leash', 'bracelet', 'keeper'] as const;
 /** One of {@link PRESET_NAMES}. */
@@ -231,6 +234,12 @@ export const StrapSpecSchema = z.object({
   mode: z.enum(['rule', 'fit']),
   /** Measured girth (neck, waist, wrist), or the working length for straps that do not close. */
   girthMm: mm('girth', L.GIRTH_MIN_MM, L.GIRTH_MAX_MM),
+  /**
+   * How the girth was taken: `snug` (tape flat on the body, nothing under it) or `two-fingers`
+   * (tape loose over two fingers laid flat, as collars are measured). Decides how tight a
+   * collar may close (checks.ts). Specs saved before it existed read as `snug`.
+   */
+  girthMeasured: z.enum(GIRTH_MEASURED).default('snug'),
   easeMm: mm('ease', L.EASE_MIN_MM, L.EASE_MAX_MM),
   /** Whether the strap closes into a loop round the body (thickness correction applies). */
   closes: z.boolean(),

@@ -17,6 +17,7 @@ export function bagStrapPreset(): StrapSpec {
     units: 'in',
     mode: 'rule',
     girthMm: inch(48),
+    girthMeasured: 'snug',
     easeMm: 0,
     closes: false,
     widthMm: inch(1.25),

@@ -20,6 +20,7 @@ export function beltPreset(): StrapSpec {
     units: 'in',
     mode: 'rule',
     girthMm: inch(34),
+    girthMeasured: 'snug',
     // Fit mode aims at the belt size (waist + 2 in), so ease mirrors the rule's allowance.
     easeMm: inch(2),
     closes: true,

@@ -16,6 +16,7 @@ export function braceletPreset(): StrapSpec {
     units: 'in',
     mode: 'rule',
     girthMm: inch(6.5),
+    girthMeasured: 'snug',
     easeMm: inch(0.25),
     closes: true,
     widthMm: inch(0.75),

@@ -18,6 +18,7 @@ export function collarPreset(): StrapSpec {
     units: 'in',
     mode: 'rule',
     girthMm: inch(13),
+    girthMeasured: 'two-fingers',
     // The loose neck measure already holds the two-finger ease (common practice).
     easeMm: 0,
     closes: true,

@@ -18,6 +18,7 @@ export function keeperPreset(): StrapSpec {
     units: 'in',
     mode: 'fit',
     girthMm: 2 * (heldWidthMm + 2 * heldThicknessMm),
+    girthMeasured: 'snug',
     easeMm: 2,
     closes: true,
     widthMm: inch(3 / 8),

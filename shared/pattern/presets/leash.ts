@@ -17,6 +17,7 @@ export function leashPreset(): StrapSpec {
     units: 'in',
     mode: 'rule',
     girthMm: inch(72),
+    girthMeasured: 'snug',
     easeMm: 0,
     closes: false,
     widthMm: inch(0.75),

@@ -18,6 +18,7 @@ export function watchStrapPreset(): StrapSpec {
     units: 'mm',
     mode: 'rule',
     girthMm: 165,
+    girthMeasured: 'snug',
     easeMm: 12,
     closes: true,
     widthMm: 20,

@@ -13,6 +13,11 @@ const MODE_OPTIONS = [
   { value: 'rule', label: 'Shop rule' },
   { value: 'fit', label: 'Fitted: middle hole at girth + ease' },
 ];
+// How the tape went round: a collar measured over two fingers already holds about 1 in of room.
+const MEASURED_OPTIONS = [
+  { value: 'snug', label: 'Snug, tape flat on the body' },
+  { value: 'two-fingers', label: 'Loose, two fingers under the tape' },
+];
 const MEASURE_OPTIONS = [
   { value: 'blank', label: 'Blank = girth + allowance' },
   { value: 'nominal-hole', label: 'Bar to middle hole = girth + allowance' },
@@ -36,6 +41,7 @@ export function MeasureSection({ control, unit, disabled, setValue }: SectionPro
   return (
     <FormSection title="Measure">
       <LengthField control={control} name="girthMm" label="Girth" unit={unit} disabled={disabled} hint="Neck, waist or wrist, measured where it is worn." />
+      <SelectInput control={control} name="girthMeasured" label="Girth measured" options={MEASURED_OPTIONS} disabled={disabled} />
       <LengthField control={control} name="easeMm" label="Ease" unit={unit} disabled={disabled} hint="Room added when the length is fitted." />
       <SelectInput control={control} name="mode" label="Length from" options={MODE_OPTIONS} disabled={disabled} wrapperClassName="col-span-2" />
       <SelectInput control={control} name="rule.measure" label="The shop rule" options={MEASURE_OPTIONS} disabled={ruleOff} wrapperClassName="col-span-2" onChanged={reshape} />
