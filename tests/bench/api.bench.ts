@@ -50,10 +50,14 @@ const base = await listen(bare);
 const id = w.collar.pattern.id;
 const cookie = w.maker.cookie;
 
-/** Median and 99th percentile of sequential request times, ms. */
-async function sequential(fn: () => Promise<Response>): Promise<{ p50: number; p99: number }> {
+/**
+ * Median and 99th percentile of sequential request times, ms, and CPU ms per request of this
+ * process (client and server both live here; the client's share is the same for both routes).
+ */
+async function sequential(fn: () => Promise<Response>): Promise<{ p50: number; p99: number; cpu: number }> {
   for (let i = 0; i < 15; i++) await (await fn()).arrayBuffer();
   const ms: number[] = [];
+  const c0 = process.cpuUsage();
   for (let i = 0; i < ROUNDS; i++) {
     const s = performance.now();
     const res = await fn();
@@ -61,8 +65,9 @@ async function sequential(fn: () => Promise<Response>): Promise<{ p50: number; p
     if (res.status >= 300) throw new Error(`answered ${res.status}`);
     ms.push(performance.now() - s);
   }
+  const c = process.cpuUsage(c0);
   ms.sort((a, b) => a - b);
-  return { p50: ms[Math.floor(ms.length / 2)]!, p99: ms[Math.floor(ms.length * 0.99)]! };
+  return { p50: ms[Math.floor(ms.length / 2)]!, p99: ms[Math.floor(ms.length * 0.99)]!, cpu: (c.user + c.system) / 1000 / ROUNDS };
 }
 
 const bareRead = await sequential(() => fetch(`${base.url}/bare/patterns/${id}`));
@@ -91,11 +96,11 @@ const bareLoad = await load(`${base.url}/bare/patterns/${id}`);
 const ourLoad = await load(`${ours.url}/api/patterns/${id}`, { cookie });
 
 const f = (v: number) => v.toFixed(2).padStart(8);
-console.log('sequential over HTTP (loopback), ms            p50       p99   ratio p50 (target)');
-console.log(`bare route: same select (baseline)        ${f(bareRead.p50)}  ${f(bareRead.p99)}`);
-console.log(`GET /api/patterns/:id                     ${f(ourRead.p50)}  ${f(ourRead.p99)}   ${(ourRead.p50 / bareRead.p50).toFixed(2)} (<= ${TARGET.read}) ${verdict(ourRead.p50 / bareRead.p50 <= TARGET.read)}`);
-console.log(`bare route: durable insert (baseline)     ${f(bareSave.p50)}  ${f(bareSave.p99)}`);
-console.log(`POST /api/patterns/:id/revisions          ${f(ourSave.p50)}  ${f(ourSave.p99)}   ${(ourSave.p50 / bareSave.p50).toFixed(2)} (<= ${TARGET.save}) ${verdict(ourSave.p50 / bareSave.p50 <= TARGET.save)}`);
+console.log('sequential over HTTP (loopback), ms            p50       p99   CPU/req   ratio p50 (target)   ratio CPU');
+console.log(`bare route: same select (baseline)        ${f(bareRead.p50)}  ${f(bareRead.p99)}  ${f(bareRead.cpu)}`);
+console.log(`GET /api/patterns/:id                     ${f(ourRead.p50)}  ${f(ourRead.p99)}  ${f(ourRead.cpu)}   ${(ourRead.p50 / bareRead.p50).toFixed(2)} (<= ${TARGET.read}) ${verdict(ourRead.p50 / bareRead.p50 <= TARGET.read)}   ${(ourRead.cpu / bareRead.cpu).toFixed(2)} ${verdict(ourRead.cpu / bareRead.cpu <= TARGET.read)}`);
+console.log(`bare route: durable insert (baseline)     ${f(bareSave.p50)}  ${f(bareSave.p99)}  ${f(bareSave.cpu)}`);
+console.log(`POST /api/patterns/:id/revisions          ${f(ourSave.p50)}  ${f(ourSave.p99)}  ${f(ourSave.cpu)}   ${(ourSave.p50 / bareSave.p50).toFixed(2)} (<= ${TARGET.save}) ${verdict(ourSave.p50 / bareSave.p50 <= TARGET.save)}   ${(ourSave.cpu / bareSave.cpu).toFixed(2)} ${verdict(ourSave.cpu / bareSave.cpu <= TARGET.save)}`);
 console.log('\n20 concurrent clients, 2,000 requests (autocannon), ms   p50       p99   p99/p50 (target)   req/s   non-2xx');
 console.log(`bare route: same select                 ${f(bareLoad.p50)}  ${f(bareLoad.p99)}   ${(bareLoad.p99 / Math.max(bareLoad.p50, 1)).toFixed(2).padStart(7)}            ${bareLoad.rps.toFixed(0).padStart(6)}   ${bareLoad.non2xx}`);
 console.log(`GET /api/patterns/:id                   ${f(ourLoad.p50)}  ${f(ourLoad.p99)}   ${(ourLoad.p99 / Math.max(ourLoad.p50, 1)).toFixed(2).padStart(7)} (< ${TARGET.p99OverP50}) ${verdict(ourLoad.p99 / Math.max(ourLoad.p50, 1) < TARGET.p99OverP50)}   ${ourLoad.rps.toFixed(0).padStart(6)}   ${ourLoad.non2xx}`);
