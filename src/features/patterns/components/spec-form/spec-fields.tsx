@@ -2,6 +2,7 @@ import { useWatch } from 'react-hook-form';
 import { HardwareSection } from './hardware-section.tsx';
 import { LeatherSection } from './leather-section.tsx';
 import { MeasureSection } from './measure-section.tsx';
+import { PiecesSection } from './pieces-section.tsx';
 import { SizesSection } from './sizes-section.tsx';
 import { StrapEndsSection } from './strap-ends-section.tsx';
 import type { SpecControl, SpecSetValue } from './types.ts';
@@ -15,7 +16,8 @@ export function SpecFields({ control, setValue, disabled }: { control: SpecContr
       <MeasureSection {...props} setValue={setValue} />
       <LeatherSection {...props} setValue={setValue} />
       <StrapEndsSection {...props} setValue={setValue} />
-      <HardwareSection {...props} />
+      <HardwareSection {...props} setValue={setValue} />
+      <PiecesSection {...props} setValue={setValue} />
       <SizesSection {...props} />
     </div>
   );
