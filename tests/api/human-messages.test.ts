@@ -113,7 +113,8 @@ describe('spec messages in the engine and the schema', () => {
     // The walk must really reach both kinds of refusal, or it proves nothing.
     expect(schemaMessages).toBeGreaterThan(500);
     expect(engineMessages).toBeGreaterThan(20);
-  });
+    // Thousands of specs: minutes on a loaded 2-core machine. The bound only guards against a hang.
+  }, 600_000);
 
   it('when the girth is too small, then the message is the label and the limit in the unit the form shows', () => {
     const at = (units: 'in' | 'mm') => specIssueMessages(StrapSpecSchema.safeParse({ ...presetSpec('collar'), units, girthMm: 10 }).error!, { units });
