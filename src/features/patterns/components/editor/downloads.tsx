@@ -38,6 +38,8 @@ export interface TrialSource {
   sizes: readonly string[];
   /** A value the schema refuses: the drawing above names it; nothing to print yet. */
   blocked: boolean;
+  /** The server's refusals of spec fields (`spec.girthMm` -> message), to put beside the fields. */
+  onSpecErrors?: (fields: Record<string, string>) => void;
 }
 
 
@@ -75,8 +77,9 @@ export function Downloads({ base, kind, revisionNumber, unit, sizes, dirty, tria
     try {
       const r = await trialPrint.mutateAsync({ spec: trial.values() as TrialPrintInput['spec'], basedOn: revisionNumber, options: trialOptionsBody(choice, unit, trial.sizes) });
       setSaved(`${r.fileName} (not saved)`);
-    } catch {
-      // The mutation holds the error; the options and the notice below show it.
+    } catch (err) {
+      // The mutation holds the error for the notice below; spec fields also go beside their input.
+      if (isApiError(err, 400) && err.fields) trial.onSpecErrors?.(err.fields);
     }
   };
   const onPdf = async () => {

@@ -48,6 +48,14 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
   const blocked = !StrapSpecSchema.safeParse(values).success;
   const live = useLiveDraft(values, String(base.number));
 
+  // The server's messages already name the field by its label ("Size L (10 in): Tip holes: ...");
+  // a save's or a trial print's refusal of `spec.<path>` goes beside that field.
+  const placeSpecErrors = (fields: Record<string, string>) => {
+    for (const [field, message] of Object.entries(fields)) {
+      if (field.startsWith('spec.')) form.setError(field.slice('spec.'.length) as FieldPath<StrapSpecInput>, { type: 'server', message });
+    }
+  };
+
   const onSave = async (note: string): Promise<boolean> => {
     setError(undefined);
     const ok = await form.trigger();
@@ -66,12 +74,7 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
         setConflict({ number: latest.head.number, author: latest.head.author?.name ?? null, note: latest.head.note, detail: latest });
       } else {
         // A refused spec value (e.g. a size too short for its tip holes) goes beside its field too.
-        if (isApiError(err, 400)) {
-          for (const [field, message] of Object.entries(err.fields ?? {})) {
-            // The server's messages already name the field by its label ("Size L (10 in): Tip holes: ...").
-            if (field.startsWith('spec.')) form.setError(field.slice('spec.'.length) as FieldPath<StrapSpecInput>, { type: 'server', message });
-          }
-        }
+        if (isApiError(err, 400)) placeSpecErrors(err.fields ?? {});
         setError(err instanceof Error ? err.message : 'The save did not go through.');
       }
       return false;
@@ -167,7 +170,7 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
               unit={savedSpec.units}
               sizes={savedSpec.sizes.map((s) => s.name)}
               dirty={canEdit && form.formState.isDirty}
-              {...(canEdit ? { trial: { patternId: id, values: () => form.getValues(), sizes: (values.sizes ?? []).map((s) => s?.name ?? ''), blocked } } : {})}
+              {...(canEdit ? { trial: { patternId: id, values: () => form.getValues(), sizes: (values.sizes ?? []).map((s) => s?.name ?? ''), blocked, onSpecErrors: placeSpecErrors } } : {})}
             />
           </Panel>
         }
