@@ -37,7 +37,7 @@ export default defineConfig({
           exclude: [...configDefaults.exclude, 'tests/pg/**'],
         },
       },
-      ...(process.env.LATCHET_PG_TESTS === '1'
+      ...(process.env.LATCHET_PG_TESTS !== '0'
         ? [
             {
               extends: true as const,
