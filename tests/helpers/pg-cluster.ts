@@ -3,7 +3,7 @@
 // role, durability switched off (nothing here must survive), deleted when stopped.
 // initdb refuses to run as root, so under root it runs as the `postgres` system user
 // (Debian's package creates it) through runuser.
-import { execFile } from 'node:child_process';
+import { execFile, spawn } from 'node:child_process';
 import { chownSync, existsSync, mkdtempSync, readdirSync, rmSync, readFileSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
@@ -83,6 +83,11 @@ export async function startPgCluster(): Promise<PgCluster> {
         if (attempt >= 3) throw err;
       }
     }
+    // If this process dies without stop() (killed, Ctrl+C, a timeout), a detached watchdog
+    // stops the cluster and deletes its folder, so no postgres is left running.
+    const pgCtl = (asRoot ? ['runuser', '-u', user, '--', join(bin, 'pg_ctl')] : [join(bin, 'pg_ctl')]).map((a) => `'${a}'`).join(' ');
+    const watchdog = `while kill -0 ${process.pid} 2>/dev/null; do sleep 2; done; ${pgCtl} -D '${data}' -m immediate stop >/dev/null 2>&1; rm -rf '${dir}'`;
+    spawn('sh', ['-c', watchdog], { detached: true, stdio: 'ignore' }).unref();
     let stopped = false;
     return {
       url: `postgres://${PG_TEST_ROLE}@127.0.0.1:${port}/postgres`,
