@@ -65,6 +65,8 @@ export function NewOrderForm({ customers, patterns, leathers, initial, onCreated
   const wearer = wearers.find((w) => String(w.id) === wearerId);
   const latest = pattern && wearer ? latestFor(pattern.kind, wearer.measurements) : null;
   const spec = head.data?.head.spec;
+  const email = customerId === 'new' ? watch('newCustomer.email') : (customers.find((c) => String(c.id) === customerId)?.email ?? '');
+  const noLinkPossible = Boolean(pattern) && fitFrom === 'later' && Boolean(customerId) && email.trim() === '';
 
   const onSubmit = handleSubmit(async (v) => {
     setProblem(undefined);
@@ -119,6 +121,11 @@ export function NewOrderForm({ customers, patterns, leathers, initial, onCreated
           />
         )}
       </Panel>
+      {noLinkPossible && (
+        <Notice tone="warning" title="No e-mail for the measuring link">
+          This customer has no e-mail address, so the order cannot send them a measuring link. Add one, or measure at the bench and add it on the customer’s page.
+        </Notice>
+      )}
       <Panel title="Details">
         <OrderDetailFields register={register} errors={formState.errors} leathers={leathers} />
       </Panel>
