@@ -79,7 +79,7 @@ async function keystrokes(page: Page): Promise<{ redraw: number[]; frame: number
       requestAnimationFrame(() => w.benchRedraw.push(performance.now() - t0));
     }).observe(document.querySelector('[data-testid="bench-card"]')!, { childList: true, subtree: true });
   });
-  const girth = page.getByLabel('Girth');
+  const girth = page.locator('input[name="girthMm"]');
   await girth.fill('19');
   await page.waitForTimeout(500);
   for (let i = 0; i < KEYS; i++) {
