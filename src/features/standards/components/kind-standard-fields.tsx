@@ -62,7 +62,7 @@ export function KindStandardFields({ control, kind, unit, hardware, disabled }: 
       <StandardLengthField control={control} name={`${p}.easeMm` as Path} label="Ease" unit={unit} disabled={disabled} hint="Room added when holes are placed to fit." />
       <StandardLengthField control={control} name={`${p}.widthMm` as Path} label="Width" unit={unit} disabled={disabled} />
       <StandardLengthField control={control} name={`${p}.edgeGuideMm` as Path} label="Edge guide" unit={unit} disabled={disabled} hint="Line scribed in from the edge." />
-      <StandardLengthField control={control} name={`${p}.stitchPitchMm` as Path} label="Stitch pitch" unit={unit} disabled={disabled} hint="Prong spacing of the pricking iron." />
+      <StandardLengthField control={control} name={`${p}.stitchPitchMm` as Path} label="Stitch pitch" unit="mm" disabled={disabled} hint="Prong spacing of the pricking iron; irons are sold by it in mm." />
       {std.holes && (
         <>
           <NumberField control={control} name={`${p}.holes.count` as Path} label="Number of holes" step={1} min={1} disabled={disabled} />

@@ -7,7 +7,8 @@ import type { LengthUnit } from '@shared/units/length.ts';
  * working in inches reads them in inches ("Ease must be at most 11 13/16 in").
  */
 export function messageInUnit(message: string, unit: LengthUnit): string {
-  if (unit === 'mm') return message;
+  // Stitch pitch and punch diameters are always shown in mm (irons and punches are sold so).
+  if (unit === 'mm' || /^(Stitch pitch|Punch diameter)\b/.test(message)) return message;
   return message.replace(/(-?\d+(?:\.\d+)?) mm\b/g, (_, n: string) => formatLength(Number(n), 'in'));
 }
 

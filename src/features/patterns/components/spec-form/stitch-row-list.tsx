@@ -43,7 +43,7 @@ export function StitchRowList({ control, unit, disabled, index, startName, endNa
             <LengthField control={control} name={path(i, 'toMm')} label="Stops" unit={unit} disabled={disabled} />
             <SelectInput control={control} name={path(i, 'toRef')} label="Measured from" options={refs} disabled={disabled} />
             <LengthField control={control} name={path(i, 'offsetMm')} label="In from the edge" unit={unit} disabled={disabled} hint="The edge guide line." />
-            <LengthField control={control} name={path(i, 'pitchMm')} label="Stitch pitch" unit={unit} disabled={disabled} hint="The iron's prong spacing." />
+            <LengthField control={control} name={path(i, 'pitchMm')} label="Stitch pitch" unit="mm" disabled={disabled} hint="The iron's prong spacing, in mm as irons are sold." />
             <NumberField control={control} name={path(i, 'tolerancePct')} label="Pitch may stretch" unit="%" step={1} min={0} max={25} disabled={disabled} />
             {!disabled && (
               <div className="flex items-end">
