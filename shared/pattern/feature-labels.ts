@@ -1,9 +1,25 @@
 import type { DrawingItem } from '../render/drawing.ts';
 import type { PieceSpec } from '../schemas/strap-spec.ts';
-import { formatLength, formatLengthBare } from '../units/format-length.ts';
+import { formatLength as formatLengthUnit, formatLengthBare as formatLengthBareUnit } from '../units/format-length.ts';
 import { ASCENT_PER_EM, codePointCount, DESCENT_PER_EM, GLYPH_ADVANCE, LABEL_SIZE_MM, NAME_SIZE_MM, label, labelLine, textLengthMm } from './draw-labels.ts';
 import { packLanes } from './label-lanes.ts';
 import type { Feature, PieceLayout } from './layout-types.ts';
+
+// formatLength builds a Fraction for every inch value, and the same lengths recur on every
+// station, caption and redraw (a tenth of drawLayout's profile): their text is remembered.
+const lengthTexts = new Map<string, string>();
+function rememberedLength(mm: number, u: 'in' | 'mm', bare: boolean): string {
+  const key = `${bare ? 'b' : 'f'}${u}${Object.is(mm, -0) ? '-0' : String(mm)}`;
+  let text = lengthTexts.get(key);
+  if (text === undefined) {
+    if (lengthTexts.size >= 4096) lengthTexts.clear();
+    text = bare ? formatLengthBareUnit(mm, u) : formatLengthUnit(mm, u);
+    lengthTexts.set(key, text);
+  }
+  return text;
+}
+const formatLength = (mm: number, u: 'in' | 'mm') => rememberedLength(mm, u, false);
+const formatLengthBare = (mm: number, u: 'in' | 'mm') => rememberedLength(mm, u, true);
 
 /** Features closer than this along the strap share one station: one label, one distance (mm). */
 const SAME_STATION_MM = 0.05;
