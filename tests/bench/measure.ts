@@ -30,11 +30,11 @@ function cpuWindow(fn: () => unknown, ms: number): number {
 /**
  * Runs `fn` for a warm-up, then in `windows` windows of about `ms / windows` each; returns the
  * median rates. The warm-up lasts at least `warmMs` and until two windows in a row agree within
- * 15 % (at most 6 s): V8 optimises hot code on background threads, and on a loaded machine
+ * 15 % (at most 8 s): V8 optimises hot code on background threads, and on a loaded machine
  * those threads wait, so a fixed short warm-up measured the unoptimised code (a collar layout
  * read 1,300/s after 0.25 s and 4,700/s after 3 s of warm-up in one loaded run).
  */
-export function rate(fn: () => unknown, ms = 600, windows = 5, warmMs = 500): Rate {
+export function rate(fn: () => unknown, ms = 600, windows = 5, warmMs = 2000): Rate {
   const w0 = performance.now();
   for (let i = 0; i < 20; i++) fn();
   let last = cpuWindow(fn, 150);
@@ -43,7 +43,7 @@ export function rate(fn: () => unknown, ms = 600, windows = 5, warmMs = 500): Ra
     const settled = Math.abs(next - last) <= 0.15 * Math.max(next, last);
     last = next;
     const elapsed = performance.now() - w0;
-    if ((settled && elapsed >= warmMs) || elapsed >= 6000) break;
+    if ((settled && elapsed >= warmMs) || elapsed >= 8000) break;
   }
   (globalThis as { gc?: () => void }).gc?.();
   const wall: number[] = [];
