@@ -1,5 +1,5 @@
 // Demo customers, their dogs and people, measurements over time and orders at every stage
-// for Harrow & Finch (all fictional), plus the shop's pricing. Runs after 02-demo-patterns.ts;
+// for Harrow & Finch (all fictional), plus the shop's pricing and its hardware's unit costs. Runs after 02-demo-patterns.ts;
 // 01-demo-shop.ts deletes the demo shop first, and everything here goes with it, so running
 // the seeds again gives the same demo.
 import type { Knex } from 'knex';
@@ -9,6 +9,7 @@ import type { OrderStage } from '../../shared/schemas/orders.ts';
 import { ORDER_STAGES, ORDER_STAGE_LABELS } from '../../shared/schemas/orders.ts';
 import type { StrapSpec } from '../../shared/schemas/strap-spec.ts';
 import { formatLength } from '../../shared/units/format-length.ts';
+import { seedDemoHardware } from '../demo/demo-hardware.ts';
 import { DEMO_SHOP } from './01-demo-shop.ts';
 
 const IN = 25.4;
@@ -117,6 +118,7 @@ export async function seed(knex: Knex): Promise<void> {
   const day = (offset: number) => new Date(now + offset * DAY).toISOString().slice(0, 10);
   await knex.transaction(async (trx) => {
     await trx('shop_pricing').insert({ shop_id: shop.id, document: JSON.stringify(PRICING), updated_by: owner, updated_at: now - 30 * DAY });
+    await seedDemoHardware(trx, shop.id, owner, now - 30 * DAY);
     let number = 1040;
     for (const c of CUSTOMERS) {
       const [cust] = await trx('customers').insert({ shop_id: shop.id, name: c.name, email: c.email, phone: c.phone, notes: c.notes, created_by: apprentice, created_at: now - 100 * DAY, updated_at: now - 100 * DAY }).returning<{ id: number }[]>('id');
