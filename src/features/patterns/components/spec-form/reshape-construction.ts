@@ -1,7 +1,5 @@
 import type { EndSpec } from '@shared/schemas/strap-spec.ts';
 
-type AdjustableHoles = Extract<EndSpec, { kind: 'adjustable' }>['holes'];
-
 /** How an end is built; `adjustable` only at the tip (the end away from the buckle). */
 export type Construction = EndSpec['kind'];
 
@@ -23,8 +21,7 @@ export function reshapeConstruction(current: EndSpec, next: Construction, widthM
     case 'plain':
       return { kind: 'plain', holes: holesOf(current), shape };
     case 'adjustable':
-      // Five holes, the third (counted from 1) the middle one; written both ways so specs that
-      // still count it from 0 read it too.
-      return { kind: 'adjustable', holes: { count: 5, spacingMm: 19.05, diameterMm: 4.7625, firstFromTipMm: r(Math.max(20, widthMm * 2.5)), middleHole: 3, nominalIndex: 2 } as unknown as AdjustableHoles, shape };
+      // Five holes 3/4 in apart, the third (counted from 1 at the buckle) the middle one.
+      return { kind: 'adjustable', holes: { count: 5, spacingMm: 19.05, diameterMm: 4.7625, firstFromTipMm: r(Math.max(20, widthMm * 2.5)), middleHole: 3 }, shape };
   }
 }
