@@ -5,7 +5,7 @@ import { formatLength } from '../units/format-length.ts';
 import { thicknessMm } from '../units/length.ts';
 import { centrelineFromInnerMm } from './bend.ts';
 import { cutList } from './cut-list.ts';
-import { placeDRings } from './d-rings.ts';
+import { placeDRings, ringsInFolds } from './d-rings.ts';
 import { checkShape } from './end-shape.ts';
 import { attachFromEndMm, placeEnd } from './end-features.ts';
 import { EngineError, fieldError, lengthIn } from './engine-error.ts';
@@ -125,6 +125,14 @@ export function computeLayout(stored: StrapSpec): PatternLayout {
   if (rings.placements.length) strapLayout.hardware = rings.placements;
   strapLayout.warnings.push(...rings.warnings);
   const pieces = laid.map((l) => l.layout);
+  // Clips (swivel snaps, rings) go in the free folds, the strap's first, then the other pieces'.
+  const clips = spec.hardware.clips;
+  let clipsLeft = clips?.count ?? 0;
+  for (const p of clipsLeft > 0 ? [strapLayout, ...pieces.filter((x) => x !== strapLayout)] : []) {
+    const placed = ringsInFolds(p, clipsLeft, clips!.kind === 'ring' ? 'ring' : clips!.kind === 'swivel-snap' ? 'swivel snap' : 'trigger snap', clips!.insideWidthMm, 0);
+    if (placed.length) p.hardware = [...(p.hardware ?? []), ...placed];
+    clipsLeft -= placed.length;
+  }
   const keeper = pieces.find((p) => p.role === 'accessory');
   const warnings = [...pieces.flatMap((p) => p.warnings), ...patternWarnings(spec, strapLayout, fit, laid[strapIdx]!.profile, t, keeper?.widthMm ?? 9.5)];
   for (const p of pieces)

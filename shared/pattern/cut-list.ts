@@ -14,6 +14,7 @@ export function cutList(spec: StrapSpec, pieces: readonly PieceLayout[], t: numb
   const hw = spec.hardware;
   if (hw.buckle.style !== 'none') hardware.push({ item: `${hw.buckle.style} buckle`, count: 1, note: `inside width ${hw.buckle.insideWidthMm.toFixed(1)} mm` });
   if (hw.dRings.count) hardware.push({ item: 'D-ring', count: hw.dRings.count, note: `inside width ${hw.dRings.insideWidthMm.toFixed(1)} mm` });
+  if (hw.clips?.count) hardware.push({ item: hw.clips.kind.replace('-', ' '), count: hw.clips.count, note: `eye inside width ${hw.clips.insideWidthMm.toFixed(1)} mm` });
   const keeperPieces = pieces.filter((p) => p.role === 'accessory').reduce((s, p) => s + p.count, 0);
   if (hw.keepers > keeperPieces) hardware.push({ item: 'keeper (not cut here)', count: hw.keepers - keeperPieces });
   const fastenerMap = new Map<string, CutList['fasteners'][number]>();

@@ -35,10 +35,17 @@ describe('D-rings and keepers', () => {
     expect(w?.message).toMatch(/fold loop .* is .*; 2 D-rings of .* wire need about/);
   });
 
-  it('when the strap has plain ends (the bag strap: its rings belong to the bag), then no D-ring is placed on it', () => {
+  it('when the strap has no buckle (the bag strap), then one D-ring sits in each end fold and both are in the cut list', () => {
     const layout = computeLayout(presetSpec('bag-strap'));
-    expect(layout.pieces[0]!.hardware).toBeUndefined();
+    expect(layout.pieces[0]!.hardware?.map((h) => h.atMm)).toEqual(layout.pieces[0]!.folds.map((f) => f.atMm));
     expect(layout.cutList.hardware.find((h) => h.item === 'D-ring')?.count).toBe(2);
+  });
+
+  it('when a strap has plain ends and no buckle, then no D-ring is placed on it (its rings belong to the bag)', () => {
+    const s = presetSpec('bag-strap');
+    const plain = { kind: 'plain' as const, holes: [], shape: { kind: 'square' as const } };
+    s.pieces[0] = { ...s.pieces[0]!, start: plain, end: plain, stitchRows: [] };
+    expect(computeLayout(s).pieces[0]!.hardware).toBeUndefined();
   });
 
   it('when the watch strap is laid out, then its keeper is a piece of its own in the cut list and the drawing, not "not cut here"', () => {

@@ -2,6 +2,13 @@ import type { StrapSpec } from '../schemas/strap-spec.ts';
 import { formatLength } from '../units/format-length.ts';
 import type { HardwarePlacement, PieceLayout, Warning } from './layout-types.ts';
 
+/** One piece of hardware in each of the first `count` folds of `piece` that hold no buckle (no tongue slot). */
+export function ringsInFolds(piece: PieceLayout, count: number, item: HardwarePlacement['item'], insideWidthMm: number, wireDiameterMm: number): HardwarePlacement[] {
+  const slots = piece.features.filter((f) => f.kind === 'slot');
+  const free = piece.folds.filter((fd) => !slots.some((s) => Math.abs(s.atMm - fd.atMm) < 0.05));
+  return free.slice(0, count).map((fd) => ({ item, atMm: fd.atMm, insideWidthMm, wireDiameterMm, zoneMm: [fd.atMm, fd.atMm], note: 'the end folds round it' }));
+}
+
 /** Clear space (mm) each D-ring's wire wants in the fold loop so it swings freely (from memory). */
 export const D_RING_CLEARANCE_MM = 1;
 
@@ -16,6 +23,8 @@ export const D_RING_CLEARANCE_MM = 1;
  */
 export function placeDRings(spec: StrapSpec, strap: PieceLayout, startIsFoldOver: boolean): { placements: HardwarePlacement[]; warnings: Warning[] } {
   const dr = spec.hardware.dRings;
+  // Without a buckle the rings are what the strap's folds wrap: one in each fold.
+  if (spec.hardware.buckle.style === 'none') return { placements: ringsInFolds(strap, dr.count, 'D-ring', dr.insideWidthMm, dr.wireDiameterMm), warnings: [] };
   const fold = strap.folds.find((f) => f.atMm < strap.blankLengthMm / 2);
   if (!dr.count || !startIsFoldOver || !fold) return { placements: [], warnings: [] };
   const F = fold.atMm;

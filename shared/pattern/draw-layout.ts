@@ -1,8 +1,8 @@
 import type { Drawing, DrawingItem, DrawingPiece, PathCommand } from '../render/drawing.ts';
 import type { StrapSpec } from '../schemas/strap-spec.ts';
-import { formatLength, formatLengthBare } from '../units/format-length.ts';
 import { itemsBounds } from './draw-labels.ts';
 import { pieceLabels } from './feature-labels.ts';
+import { hardwareCaptions, hardwareNotes } from './hardware-labels.ts';
 import type { Feature, PatternLayout, PieceLayout } from './layout-types.ts';
 import { insetChain } from './offset.ts';
 import { pieceOutline } from './outline.ts';
@@ -82,10 +82,8 @@ function drawPiece(spec: StrapSpec, piece: PieceLayout, withLabels: boolean): Dr
     const first = rings[0];
     const extra = first
       ? {
-          above: [{ atMm: rings.reduce((a, r) => a + r.atMm, 0) / rings.length, text: `${rings.length > 1 ? `${rings.length} x ` : ''}D-ring in fold loop` }],
-          caption: [
-            `D-ring${rings.length > 1 ? 's' : ''}: ${rings.length} x ${formatLength(first.insideWidthMm, u)} inside, ${formatLength(first.wireDiameterMm, u)} wire, ${first.note}; bar${rings.length > 1 ? 's' : ''} at ${rings.map((r) => formatLengthBare(r.atMm, u)).join(' and ')} (dashed).`,
-          ],
+          above: hardwareNotes(rings),
+          caption: hardwareCaptions(rings, u),
         }
       : {};
     items.push(...pieceLabels(piece, ps, u, extra).items);

@@ -1,6 +1,6 @@
 /** The public engine: spec in, Layout and Drawing out. The spec file format is documented in README.md. */
 export { PRESET_NAMES, type PresetName, type StrapSpec } from '../schemas/strap-spec.ts';
-export { presetSpec } from './presets/index.ts';
+export { presetSpec, presetVariant, PRESET_VARIANTS } from './presets/index.ts';
 export { parseSpec } from './parse-spec.ts';
 export { computeLayout } from './compute-layout.ts';
 export { drawLayout, type DrawOptions } from './draw-layout.ts';

@@ -97,7 +97,7 @@ export interface StitchRowLayout {
 
 /** Hardware that rides on a piece (not cut or punched): a D-ring in the buckle-end fold. */
 export interface HardwarePlacement {
-  item: 'D-ring';
+  item: 'D-ring' | 'swivel snap' | 'trigger snap' | 'ring';
   /** Where the ring's straight bar lies across the strap, mm from the datum (body side of the fold). */
   atMm: number;
   insideWidthMm: number;

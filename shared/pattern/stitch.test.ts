@@ -9,9 +9,10 @@ describe('stitch rows', () => {
     const L = layout.pieces[0]!.blankLengthMm;
     for (const r of rows) {
       const first = r.holes[0]!, last = r.holes[r.holes.length - 1]!;
-      expect(first.x).toBeCloseTo(2 * 25.4, 6);
-      expect(last.x).toBeCloseTo(L - 2 * 25.4, 6);
-      expect(r.seamLengthMm).toBeCloseTo(L - 4 * 25.4, 6);
+      // The rows run between the riveted flaps: 4 1/2 in from each end.
+      expect(first.x).toBeCloseTo(4.5 * 25.4, 6);
+      expect(last.x).toBeCloseTo(L - 4.5 * 25.4, 6);
+      expect(r.seamLengthMm).toBeCloseTo(L - 9 * 25.4, 6);
       expect(r.holes.length - 1).toBe(Math.round(r.seamLengthMm / 3.85));
       for (let i = 1; i < r.holes.length; i++) expect(Math.hypot(r.holes[i]!.x - r.holes[i - 1]!.x, r.holes[i]!.y - r.holes[i - 1]!.y)).toBeCloseTo(r.adjustedPitchMm, 6);
       expect(Math.abs(r.adjustedPitchMm - 3.85) / 3.85).toBeLessThan(0.05);

@@ -20,8 +20,8 @@ describe('layout warnings', () => {
   it('when a screw hole sits 4 mm from the edge, then hole-near-edge says how far it is and what it needs (8 mm, common practice)', () => {
     const s = presetSpec('bag-strap');
     const start = s.pieces[0]!.start;
-    if (start.kind !== 'plain') throw new Error('preset changed');
-    start.holes[0]!.yMm = s.widthMm / 2 - 4;
+    if (start.kind !== 'fold-over') throw new Error('preset changed');
+    start.flapHoles[0] = { ...start.flapHoles[0]!, fastener: 'screw', yMm: s.widthMm / 2 - 4 };
     const w = computeLayout(s).warnings.find((x) => x.code === 'hole-near-edge')!;
     expect(w.message).toMatch(/5\/32 in from the edge.*needs 5\/16 in/);
   });

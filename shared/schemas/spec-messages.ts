@@ -44,6 +44,8 @@ const CHOICE_WORDS: Record<string, string> = {
   'fold-back': 'folded back into a loop',
   adjustable: 'adjustment holes',
   snug: 'snug on the body',
+  'swivel-snap': 'swivel snap',
+  'trigger-snap': 'trigger snap',
   'two-fingers': 'loose over two fingers',
 };
 

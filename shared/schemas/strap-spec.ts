@@ -180,6 +180,17 @@ export const HardwareSchema = z.object({
     wireDiameterMm: mm('D-ring wire', 0.5, 15),
   }),
   keepers: count('keeper count', 0, 4),
+  /**
+   * Snaps, swivels or rings the strap's end folds wrap (a bag or instrument strap's clips):
+   * one at each fold that holds no buckle, up to `count`.
+   */
+  clips: z
+    .object({
+      kind: z.enum(['swivel-snap', 'trigger-snap', 'ring']),
+      count: count('clip count', 0, 4),
+      insideWidthMm: mm('clip eye inside width', L.WIDTH_MIN_MM, L.WIDTH_MAX_MM),
+    })
+    .optional(),
   /** Fixed length in the closed loop that is not leather, e.g. a watch case from spring bar to spring bar. */
   loopExtraMm: mm('loop extra', 0, 300).default(0),
 });
