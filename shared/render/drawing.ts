@@ -82,6 +82,8 @@ export interface DrawingPiece {
   /** Extent of everything drawn, labels included; renderers size sheets from this. */
   bounds: BoxMm;
   items: DrawingItem[];
+  /** The size of a run this piece belongs to, with its girth and width as the title block shows them. */
+  size?: { name: string; girth: string; width: string };
 }
 
 /** Title block printed with the drawing. Strings are already formatted for display. */

@@ -55,7 +55,7 @@ export function revisionDrawing(spec: StrapSpec, options: Pick<PrintOptions, 'si
   const many = picked.length > 1;
   const pieces = drawings.flatMap((d, i) => {
     const size = picked[i]?.size;
-    return d.pieces.map((pc) => (size === undefined ? pc : { ...pc, id: `${pc.id}-${size}`, name: `${pc.name}, size ${size}` }));
+    return d.pieces.map((pc) => (size === undefined ? pc : { ...pc, id: `${pc.id}-${size}`, name: `${pc.name}, size ${size}`, size: { name: size, girth: d.title.girth, width: d.title.width } }));
   });
   const sizeText = many ? `${picked.map((p) => p.size).join(', ')}` : (picked[0]?.size ?? first.title.size);
   return {

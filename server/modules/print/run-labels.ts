@@ -1,4 +1,5 @@
-import type { PagePlan } from './page-plan.ts';
+import type { Drawing, TitleBlock } from '@shared/render/drawing.ts';
+import type { PagePlan, PlannedPage } from './page-plan.ts';
 
 /** Longest a map row's name may be before it is cut with an ellipsis (characters). */
 const MAX_LABEL = 14;
@@ -29,4 +30,28 @@ export function runLabels(plan: PagePlan, pieceNames: readonly string[]): string
   const perRun = plan.runs.map((r) => r.pieceIndexes.map((i) => pieceNames[i] ?? `piece ${i + 1}`));
   const prefix = plan.runs.length > 1 ? commonWordPrefix(perRun.flat()) : '';
   return perRun.map((names) => cut(names.map((s) => s.slice(prefix.length).trim() || s).join(' + ')));
+}
+
+/**
+ * The title block of one sheet of a size run: it names the sizes whose pieces are on that
+ * sheet ("XS, S"), with their girths and widths, so a loose sheet says which sizes it holds.
+ * Sheets of a single pattern keep the drawing's title.
+ */
+export function sheetTitle(drawing: Drawing, page: PlannedPage): TitleBlock {
+  const seen = new Map<string, NonNullable<Drawing['pieces'][number]['size']>>();
+  // In the drawing's order (the run's, smallest girth first), whatever the packing order.
+  for (const i of [...new Set(page.placements.map((pl) => pl.pieceIndex))].sort((a, b) => a - b)) {
+    const size = drawing.pieces[i]?.size;
+    if (size && !seen.has(size.name)) seen.set(size.name, size);
+  }
+  const sizes = [...seen.values()];
+  if (sizes.length === 0) return drawing.title;
+  const range = (a: string, b: string) => (a === b ? a : `${a} to ${b}`);
+  const widths = [...new Set(sizes.map((s) => s.width))];
+  return {
+    ...drawing.title,
+    size: sizes.map((s) => s.name).join(', '),
+    girth: range(sizes[0]!.girth, sizes[sizes.length - 1]!.girth),
+    width: widths.length === 1 ? widths[0]! : widths.join(', '),
+  };
 }

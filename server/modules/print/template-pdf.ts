@@ -6,7 +6,7 @@ import { fmtLength } from './format-length.ts';
 import { drawJobSheet, type JobSheet } from './job-sheet.ts';
 import { ROW, type PlanPiece } from './pack.ts';
 import { drawPagePlace, type PlaceContext } from './page-place.ts';
-import { runLabels } from './run-labels.ts';
+import { runLabels, sheetTitle } from './run-labels.ts';
 import { FRAME, pageFrame } from './page-frame.ts';
 import { planPages, type PagePlan, type PlannedPage } from './page-plan.ts';
 import { addPageMm, createDoc, finishDoc } from './pdf-doc.ts';
@@ -86,7 +86,7 @@ function drawPage(doc: PDFKit.PDFDocument, input: TemplateInput, plan: PagePlan,
   if (page.seamRight) drawSeamMarks(doc, page, page.seamRight, 'right');
   drawCalibration(doc, f.band);
   const titleX = f.band.minX + SQUARE_BLOCK_MM + 2;
-  drawTitleBlock(doc, drawing.title, f.band, titleX);
+  drawTitleBlock(doc, sheetTitle(drawing, page), f.band, titleX);
   const placeX = titleX + TITLE_BLOCK_MM + 4;
   drawPagePlace(doc, plan, page, { ...f.band, minX: placeX }, place);
   textMm(doc, caution, f.caution.minX, f.caution.maxY - 0.6, { capMm: 1.5, maxWidthMm: f.caution.maxX - f.caution.minX, color: '#222222' });

@@ -14,6 +14,8 @@ export interface LengthFieldProps<T extends FieldValues, TOut = T> {
   hint?: ReactNode;
   disabled?: boolean;
   wrapperClassName?: string;
+  /** An optional field: left empty, the value is undefined (e.g. a size that keeps the pattern's width). */
+  optional?: boolean;
 }
 
 /**
@@ -21,7 +23,7 @@ export interface LengthFieldProps<T extends FieldValues, TOut = T> {
  * as "1 3/16", "15½" or "15-1/2" for inches, or a length with its own unit such as "381mm"),
  * writes mm into the form, and shows why typed text is not a length, or the schema's message.
  */
-export function LengthField<T extends FieldValues, TOut = T>({ control, name, label, unit, hint, disabled, wrapperClassName }: LengthFieldProps<T, TOut>) {
+export function LengthField<T extends FieldValues, TOut = T>({ control, name, label, unit, hint, disabled, wrapperClassName, optional }: LengthFieldProps<T, TOut>) {
   const { field, fieldState } = useController({ control, name });
   const mm = field.value as number | undefined;
   const [text, setText] = useState(() => lengthToText(mm, unit));
@@ -50,7 +52,7 @@ export function LengthField<T extends FieldValues, TOut = T>({ control, name, la
       wrapperClassName={wrapperClassName}
       onChange={(e) => {
         setText(e.target.value);
-        field.onChange(textToLengthMm(e.target.value, unit));
+        field.onChange(optional && e.target.value.trim() === '' ? undefined : textToLengthMm(e.target.value, unit));
       }}
       onBlur={() => {
         field.onBlur();

@@ -14,10 +14,12 @@ export interface NumberFieldProps<T extends FieldValues, TOut = T> {
   max?: number;
   disabled?: boolean;
   wrapperClassName?: string;
+  /** An optional field: left empty, the value is undefined instead of NaN. */
+  optional?: boolean;
 }
 
 /** A plain number over a form field (counts, ounces, factors); empty or junk becomes NaN for the schema to name. */
-export function NumberField<T extends FieldValues, TOut = T>({ control, name, label, unit, hint, step = 'any', min, max, disabled, wrapperClassName }: NumberFieldProps<T, TOut>) {
+export function NumberField<T extends FieldValues, TOut = T>({ control, name, label, unit, hint, step = 'any', min, max, disabled, wrapperClassName, optional }: NumberFieldProps<T, TOut>) {
   const { field, fieldState } = useController({ control, name });
   const value = field.value as number | undefined;
   return (
@@ -36,7 +38,7 @@ export function NumberField<T extends FieldValues, TOut = T>({ control, name, la
       disabled={disabled}
       wrapperClassName={wrapperClassName}
       value={value === undefined || Number.isNaN(value) ? '' : value}
-      onChange={(e) => field.onChange(e.target.value === '' ? Number.NaN : e.target.valueAsNumber)}
+      onChange={(e) => field.onChange(e.target.value === '' ? (optional ? undefined : Number.NaN) : e.target.valueAsNumber)}
       onBlur={field.onBlur}
     />
   );

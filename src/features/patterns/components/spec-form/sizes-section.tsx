@@ -1,7 +1,9 @@
 import { useMemo } from 'react';
 import { useController, useFieldArray, useWatch } from 'react-hook-form';
 import { SIZES_MAX, SIZE_NAME_MAX_CHARS, StrapSpecSchema } from '@shared/schemas/strap-spec.ts';
+import { describeSpecIssue } from '@shared/schemas/spec-messages.ts';
 import { LengthField } from '@/components/form/length-field.tsx';
+import { NumberField } from '@/components/form/number-field.tsx';
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import type { SectionProps, SpecControl } from './types.ts';
@@ -28,6 +30,28 @@ function SizeName({ control, index, disabled }: { control: SpecControl; index: n
   );
 }
 
+const hasGrading = (s: { widthMm?: unknown; holes?: unknown; hardware?: unknown } | undefined) => !!s && (s.widthMm !== undefined || s.holes !== undefined || s.hardware !== undefined);
+
+/**
+ * What this size grades besides its girth: width, tip holes and buckle. Left empty, a value
+ * comes from the pattern (the buckle and D-rings follow a graded width).
+ */
+function SizeGrading({ control, index: i, unit, disabled, open }: { control: SpecControl; index: number; unit: SectionProps['unit']; disabled: boolean; open: boolean }) {
+  const n = i + 1;
+  return (
+    <details className="col-span-3 rounded-md border border-hide-100 px-3 py-2" open={open}>
+      <summary className="cursor-pointer text-sm text-hide-700">Width, holes and buckle of size {n}</summary>
+      <p className="mt-1 text-xs text-hide-600">Empty: as the pattern. The buckle and D-rings follow the width unless set here.</p>
+      <div className="mt-2 grid grid-cols-2 gap-3">
+        <LengthField control={control} name={`sizes.${i}.widthMm`} label={`Size ${n} width`} unit={unit} disabled={disabled} optional />
+        <NumberField control={control} name={`sizes.${i}.holes.count`} label={`Size ${n} holes`} unit="count" step={1} min={1} disabled={disabled} optional />
+        <LengthField control={control} name={`sizes.${i}.holes.spacingMm`} label={`Size ${n} hole spacing`} unit={unit} disabled={disabled} optional />
+        <LengthField control={control} name={`sizes.${i}.hardware.buckleInsideWidthMm`} label={`Size ${n} buckle inside width`} unit={unit} disabled={disabled} optional />
+      </div>
+    </details>
+  );
+}
+
 /**
  * The size run graded from this pattern: named girths, printed one at a time or all
  * together. The run's fit ranges are shown beside the preview.
@@ -40,7 +64,8 @@ export function SizesSection({ control, unit, disabled }: SectionProps) {
   // for the array's issues directly, since the resolver files them under no input.
   const rootError = useMemo(() => {
     const r = StrapSpecSchema.shape.sizes.safeParse(sizes);
-    return r.success ? undefined : r.error.issues.find((i) => i.path.length === 0)?.message;
+    const issue = r.success ? undefined : r.error.issues.find((i) => i.path.length === 0);
+    return issue ? describeSpecIssue({ ...issue, path: ['sizes'] }, { sizes }) : undefined;
   }, [sizes]);
 
   const addSize = () => {
@@ -73,6 +98,7 @@ export function SizesSection({ control, unit, disabled }: SectionProps) {
             >
               Remove
             </Button>
+            <SizeGrading control={control} index={i} unit={unit} disabled={disabled} open={hasGrading(sizes[i])} />
           </li>
         ))}
       </ol>
