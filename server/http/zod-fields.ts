@@ -5,22 +5,29 @@ import type { z } from 'zod';
 import { describeIssue, describeSpecIssue, valueAt } from '@shared/schemas/spec-messages.ts';
 import { badInput, type FieldErrors, type HttpError } from './http-error.ts';
 
-/** "shopName" -> "Shop name", "tags.2" -> "Tags": the words of the last named step. */
+/** "shopName" -> "Shop name", "tags.2" -> "Tags", "girthMm" -> "Girth": the words of the last named step. */
 export function wordsOfKey(path: readonly PropertyKey[]): string {
   const leaf = [...path].reverse().find((s) => typeof s === 'string' && !/^\d+$/.test(s));
   const words = String(leaf ?? 'value')
+    .replace(/(.)Mm$/, '$1') // the unit suffix of a key is not a word people see
     .replace(/([a-z0-9])([A-Z])/g, '$1 $2')
     .replace(/[_-]+/g, ' ')
     .toLowerCase();
   return words.charAt(0).toUpperCase() + words.slice(1);
 }
 
-/** A message for an issue outside a strap spec: our schemas start with the key, zod's own ones do not. */
+/**
+ * A message for an issue outside a strap spec. Older schemas start with the key ("email is
+ * required": the key becomes the label); newer ones write a whole sentence that already names
+ * the field by its label ("Leather colour must be at most 80 characters": kept as it is, never
+ * a label in front of a label); zod's own wording is rewritten; any other fragment gets the label.
+ */
 function plainMessage(issue: z.core.$ZodIssue, input: unknown): string {
   const label = wordsOfKey(issue.path);
   const leaf = [...issue.path].reverse().find((s) => typeof s === 'string' && !/^\d+$/.test(s));
   if (typeof leaf === 'string' && issue.message.startsWith(`${leaf} `)) return label + issue.message.slice(leaf.length);
-  if (/^(Invalid|Too (small|big)|Expected|Unrecognized)/.test(issue.message)) return describeIssue(issue, { label, kind: 'text' }, { input, unit: 'mm' });
+  if (/^(Invalid|Too (small|big)|Expected|Unrecognized|Required)/.test(issue.message)) return describeIssue(issue, { label, kind: 'text' }, { input, unit: 'mm' });
+  if (/^[A-Z]/.test(issue.message)) return issue.message;
   return `${label}: ${issue.message}`;
 }
 

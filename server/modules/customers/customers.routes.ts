@@ -3,7 +3,7 @@ import { Router } from 'express';
 import { CustomerSchema, MeasurementSchema, UpdateCustomerSchema, UpdateWearerSchema, WearerSchema } from '@shared/schemas/orders.ts';
 import { param, route } from '../../http/allow.ts';
 import { authOf } from '../../http/require-role.ts';
-import { body } from '../orders/parse-input.ts';
+import { validate as body } from '../../http/validate.ts';
 import type { CustomersService } from './customers.service.ts';
 
 export function customersRoutes(customers: CustomersService): Router {

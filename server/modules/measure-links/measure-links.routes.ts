@@ -4,7 +4,7 @@ import { Router } from 'express';
 import { MeasurementRequestSchema } from '@shared/schemas/orders.ts';
 import { param, route } from '../../http/allow.ts';
 import { authOf } from '../../http/require-role.ts';
-import { body } from '../orders/parse-input.ts';
+import { validate as body } from '../../http/validate.ts';
 import type { MeasureLinksService } from './measure-links.service.ts';
 
 export function measureLinksRoutes(links: MeasureLinksService): Router {

@@ -14,7 +14,7 @@ import { createCustomersRepository } from '../customers/customers.repository.ts'
 import { newToken, plausibleToken, tokenHash } from '../invites/tokens.ts';
 import { measureAnsweredMail, measureRequestMail } from '../orders/order-mails.ts';
 import { fitPiece } from '../orders/order-fit.ts';
-import { parseInput } from '../orders/parse-input.ts';
+import { parseOr400 } from '../../http/zod-fields.ts';
 import { createOrdersRepository, type ListedOrderRow } from '../orders/orders.repository.ts';
 import type { OrdersDeps } from '../orders/orders.service.ts';
 import { stageLabel } from '../orders/order-words.ts';
@@ -95,7 +95,7 @@ export function createMeasureLinksService(deps: OrdersDeps, orderOr404: (shopId:
     async answer(token: string | undefined, raw: MeasureAnswerInput): Promise<MeasureAnswered> {
       const { order } = await usable(token);
       const kind = order.pattern_kind as PresetName;
-      const input = parseInput(measureAnswerSchema(kind), raw);
+      const input = parseOr400(measureAnswerSchema(kind), raw ?? {});
       // The mean of the two readings, to the half millimetre (they agree within the tolerance).
       const girthMm = Math.round(input.girthMm + input.confirmGirthMm) / 2;
       const spec = JSON.parse(order.spec) as StrapSpec;

@@ -4,13 +4,14 @@ import { Router } from 'express';
 import { CreateOrderSchema, JobSheetQuerySchema, MoveOrderSchema, OrderListQuerySchema, UpdateOrderSchema } from '@shared/schemas/orders.ts';
 import { param, route } from '../../http/allow.ts';
 import { authOf } from '../../http/require-role.ts';
-import { body, parseInput } from './parse-input.ts';
+import { validate as body } from '../../http/validate.ts';
+import { parseOr400 } from '../../http/zod-fields.ts';
 import type { OrdersService } from './orders.service.ts';
 
 export function ordersRoutes(orders: OrdersService): Router {
   const r = Router();
   route(r, 'orders.list', async (req, res) => {
-    res.json(await orders.list(authOf(req), parseInput(OrderListQuerySchema, req.query)));
+    res.json(await orders.list(authOf(req), parseOr400(OrderListQuerySchema, req.query)));
   });
   route(r, 'orders.create', body(CreateOrderSchema), async (req, res) => {
     const out = await orders.create(authOf(req), req.body);
@@ -26,7 +27,7 @@ export function ordersRoutes(orders: OrdersService): Router {
     res.json(await orders.move(authOf(req), param(req, 'id'), req.body));
   });
   route(r, 'orders.jobSheet', async (req, res) => {
-    const { paper } = parseInput(JobSheetQuerySchema, req.query);
+    const { paper } = parseOr400(JobSheetQuerySchema, req.query);
     const file = await orders.jobSheet(authOf(req), param(req, 'id'), paper);
     res.setHeader('Content-Type', file.contentType);
     res.setHeader('Content-Disposition', `attachment; filename="${file.fileName}"`);

@@ -8,7 +8,7 @@ import type { Config } from '../../config.ts';
 import { param, route } from '../../http/allow.ts';
 import { HttpError, badInput } from '../../http/http-error.ts';
 import { authOf } from '../../http/require-role.ts';
-import { parseInput } from '../orders/parse-input.ts';
+import { parseOr400 } from '../../http/zod-fields.ts';
 import type { PhotosService, PhotoTarget } from './photos.service.ts';
 
 /** multer in memory with the configured size limit; its errors in our words (413 too large). */
@@ -51,7 +51,7 @@ export function photosRoutes(photos: PhotosService, config: Config): Router {
     });
     route(r, `${prefix}.upload` as Action, upload, async (req, res) => {
       if (!req.file) throw badInput({ file: 'Photo is required: send it as the file field' });
-      const { caption } = parseInput(PhotoCaptionSchema, req.body ?? {});
+      const { caption } = parseOr400(PhotoCaptionSchema, req.body ?? {});
       res.status(201).json(await photos.upload(authOf(req), target, param(req, 'id'), req.file.buffer, caption));
     });
     route(r, `${prefix}.file` as Action, async (req, res) => {

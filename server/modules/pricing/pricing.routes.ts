@@ -4,7 +4,7 @@ import { Router } from 'express';
 import { ShopPricingSchema } from '@shared/schemas/orders.ts';
 import { route } from '../../http/allow.ts';
 import { authOf } from '../../http/require-role.ts';
-import { body } from '../orders/parse-input.ts';
+import { validate as body } from '../../http/validate.ts';
 import type { PricingService } from './pricing.service.ts';
 
 export function pricingRoutes(pricing: PricingService): Router {

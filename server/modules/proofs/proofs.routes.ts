@@ -5,7 +5,7 @@ import { Router } from 'express';
 import { ApproveProofSchema, ProofChangeSchema } from '@shared/schemas/orders.ts';
 import { param, route } from '../../http/allow.ts';
 import { authOf } from '../../http/require-role.ts';
-import { body } from '../orders/parse-input.ts';
+import { validate as body } from '../../http/validate.ts';
 import { sendImage } from '../photos/photos.routes.ts';
 import type { PhotosService } from '../photos/photos.service.ts';
 import type { ProofsService } from './proofs.service.ts';
