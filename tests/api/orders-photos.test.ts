@@ -51,6 +51,14 @@ describe('uploads', () => {
     await request(t.app).get(res.body.photo.url).set('Cookie', w.outsider.cookie).expect(404);
   });
 
+  it('when an upload carries no file, then the refusal asks for an image file in plain words (no form field names)', async () => {
+    const { order } = await makeOrder(t, w, w.maker);
+    const json = await request(t.app).post(`/api/orders/${order.id}/photos`).set('Cookie', w.maker.cookie).send({ caption: 'Pepper' }).expect(400);
+    expect(json.body.error.fields.file).toBe('Photo is required: choose an image file to upload');
+    const empty = await request(t.app).post(`/api/orders/${order.id}/photos`).set('Cookie', w.maker.cookie).field('caption', 'Pepper').expect(400);
+    expect(empty.body.error.fields.file).toBe('Photo is required: choose an image file to upload');
+  });
+
   it('when an HTML file is renamed .png, then it is refused with 415 and no file is left', async () => {
     const { order } = await makeOrder(t, w);
     const html = Buffer.from('<!doctype html><html><script>alert(1)</script></html>');

@@ -61,6 +61,16 @@ describe('price', () => {
     expect(p.totalCents).toBe(188);
   });
 
+  it("when hardware chosen on an order leaves the shop's list, then the price says so in words, never by the item's id", async () => {
+    await request(t.app).put('/api/shop/standards').set('Cookie', w.owner.cookie).send({ units: 'in', hardware: HARDWARE }).expect(200);
+    const { order } = await makeOrder(t, w, w.maker, { hardware: [{ itemId: 'buckle-1in', quantity: 1 }] });
+    await request(t.app).put('/api/shop/standards').set('Cookie', w.owner.cookie).send({ units: 'in', hardware: HARDWARE.slice(1) }).expect(200);
+    const p = ((await request(t.app).get(`/api/orders/${order.id}`).set('Cookie', w.maker.cookie).expect(200)).body.order as OrderDetail).price!;
+    expect(p.missing).toContain("A hardware item of this order is no longer in the shop's hardware list: choose its hardware again");
+    expect(p.hardware).toEqual([{ itemId: 'buckle-1in', name: 'Hardware no longer in the list', quantity: 1, unitCostCents: 0, cents: 0 }]);
+    expect(JSON.stringify([p.missing, p.hardware.map((h) => h.name)])).not.toContain('buckle-1in');
+  });
+
   it('when the leather has no price, then the order says what is missing and shows no price on the board', async () => {
     const { order } = await makeOrder(t, w, w.maker, { leatherId: 'shell-cordovan' });
     expect(order.priceCents).toBeNull();

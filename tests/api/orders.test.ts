@@ -86,6 +86,13 @@ describe('order lifecycle', () => {
     expect(res.body.error.fields.fit).toBe('Mab has no neck measurement yet: add one, or ask the customer for it later');
   });
 
+  it("when an order names another wearer's measurement, then it is refused naming this wearer, not an id", async () => {
+    const mine = await makeOrder(t, w, w.maker);
+    const other = await makeOrder(t, w, w.maker);
+    const res = await post('/api/orders', { wearerId: mine.wearerId, patternId: w.collar.pattern.id, fit: { from: 'measurement', measurementId: other.measurementId }, dueDate: '2027-05-01' }).expect(400);
+    expect(res.body.error.fields.fit).toBe("That measurement is not one of Pepper's");
+  });
+
   it('when fields are wrong, then each message names the field by its label (no paths, no camelCase)', async () => {
     const res = await post('/api/orders', { wearerId: 1, patternId: 1, fit: { from: 'later' }, dueDate: '14/03/2027', quantity: 0, benchMinutes: 'soon' }).expect(400);
     expect(res.body.error.fields).toEqual({ dueDate: 'Due date must be a date such as 2027-03-14', quantity: 'Quantity must be at least 1', benchMinutes: 'Bench time must be a whole number' });

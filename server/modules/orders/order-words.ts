@@ -21,7 +21,8 @@ const FIELD_LABELS: Record<string, string> = {
 };
 
 export function changedWords(keys: string[]): string {
-  const words = keys.map((k) => FIELD_LABELS[k] ?? k);
+  // A key without a label is spelled out in words, never shown as a camelCase name.
+  const words = keys.map((k) => FIELD_LABELS[k] ?? k.replace(/([a-z0-9])([A-Z])/g, '$1 $2').toLowerCase());
   return `Changed ${words.join(', ')}.`;
 }
 

@@ -57,7 +57,7 @@ export function createOrdersService(deps: OrdersDeps) {
     const part = PART_FOR_KIND[kind];
     const m = fit.measurementId !== undefined ? await customers.measurementById(fit.measurementId) : await customers.latestMeasurement(wearer.id, part);
     if (!m || m.wearer_id !== wearer.id) {
-      const what = fit.measurementId !== undefined ? 'That measurement is not one of this wearer' : `${wearer.name} has no ${part === 'other' ? '' : `${BODY_PART_LABELS[part].toLowerCase()} `}measurement yet: add one, or ask the customer for it later`;
+      const what = fit.measurementId !== undefined ? `That measurement is not one of ${wearer.name}'s` : `${wearer.name} has no ${part === 'other' ? '' : `${BODY_PART_LABELS[part].toLowerCase()} `}measurement yet: add one, or ask the customer for it later`;
       throw badInput({ fit: what });
     }
     fitPiece(revisionKey, spec, { girthMm: Number(m.girth_mm) });

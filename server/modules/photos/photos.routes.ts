@@ -16,12 +16,12 @@ export function photoUpload(config: Config): RequestHandler {
   const kb = Math.round(config.photoMaxBytes / 1024);
   const single = multer({ storage: multer.memoryStorage(), limits: { fileSize: config.photoMaxBytes, files: 1, fields: 5, parts: 8 } }).single('file');
   return (req, res, next) => {
-    if (!req.is('multipart/form-data')) return next(badInput({ file: 'Photo is required: send it as a file upload' }));
+    if (!req.is('multipart/form-data')) return next(badInput({ file: 'Photo is required: choose an image file to upload' }));
     single(req, res, (err: unknown) => {
       if (!err) return next();
       if (err instanceof multer.MulterError) {
         if (err.code === 'LIMIT_FILE_SIZE') return next(new HttpError(413, 'photo_too_large', `Photo must be at most ${kb >= 1024 ? `${Math.round(kb / 102.4) / 10} MB` : `${kb} KB`}.`, { file: 'Photo is too large' }));
-        return next(badInput({ file: 'Photo: upload one image file' }));
+        return next(badInput({ file: 'Photo: upload one image file at a time' }));
       }
       next(err);
     });
@@ -50,7 +50,7 @@ export function photosRoutes(photos: PhotosService, config: Config): Router {
       res.json(await photos.list(authOf(req), target, param(req, 'id')));
     });
     route(r, `${prefix}.upload` as Action, upload, async (req, res) => {
-      if (!req.file) throw badInput({ file: 'Photo is required: send it as the file field' });
+      if (!req.file) throw badInput({ file: 'Photo is required: choose an image file to upload' });
       const { caption } = parseOr400(PhotoCaptionSchema, req.body ?? {});
       res.status(201).json(await photos.upload(authOf(req), target, param(req, 'id'), req.file.buffer, caption));
     });

@@ -67,9 +67,10 @@ export function priceOrder(p: PriceInput): PriceView {
   const leatherCents = leather ? Math.round(areaSqFt * leather.pricePerSqFtCents) : 0;
   const hardware = p.hardware.map((h) => {
     const item = p.hardwareItems.find((i) => i.id === h.itemId);
-    if (!item) missing.push(`Hardware ${h.itemId} is no longer in the shop's hardware list`);
+    // The id is our key, not a word people read: a removed item is named for what happened to it.
+    if (!item) missing.push("A hardware item of this order is no longer in the shop's hardware list: choose its hardware again");
     const unit = item?.unitCostCents ?? 0;
-    return { itemId: h.itemId, name: item?.name ?? h.itemId, quantity: h.quantity, unitCostCents: unit, cents: unit * h.quantity };
+    return { itemId: h.itemId, name: item?.name ?? 'Hardware no longer in the list', quantity: h.quantity, unitCostCents: unit, cents: unit * h.quantity };
   });
   const benchCents = Math.round((p.benchMinutes * p.pricing.hourlyRateCents) / 60);
   const pieceCents = leatherCents + hardware.reduce((a, h) => a + h.cents, 0) + benchCents;
