@@ -35,7 +35,7 @@ export function pieceWarnings(spec: StrapSpec, piece: PieceLayout, profile: Widt
     const edge = profile.at(f.atMm) / 2 - Math.abs(f.yMm);
     const need = isFastener(f) ? FASTENER_EDGE_MM : (f.diameterMm ?? f.widthMm ?? 0) / 2 + MIN_WEB_MM;
     if (edge < need - 1e-6)
-      w('hole-near-edge', `${piece.name}: ${f.label} at ${formatLength(f.atMm, u)} is ${formatLength(edge, u)} from the edge (centre); needs ${formatLength(need, u)}`);
+      w('hole-near-edge', `${piece.name}: the centre of ${f.label} at ${formatLength(f.atMm, u)} is ${formatLength(edge, u)} from the edge; it needs ${formatLength(need, u)}`);
   }
   for (let i = 0; i < holes.length; i++)
     for (let j = i + 1; j < holes.length; j++) {
@@ -100,15 +100,19 @@ export function patternWarnings(spec: StrapSpec, strap: PieceLayout, fit: FitRep
     // Past the tongue the tail must clear the frame and slip through each keeper (its width plus two layers).
     const need = b.tongueLengthMm + spec.hardware.keepers * (keeperWidthMm + 2 * t) + 6;
     if (tail < need - 1e-6)
-      add('tail-short', `tail past the nominal hole is ${formatLength(tail, u)}; passing the buckle${spec.hardware.keepers ? ' and keeper' : ''} takes about ${formatLength(need, u)}`, strap.id);
+      add('tail-short', `the tail past the middle hole is ${formatLength(tail, u)}; passing the buckle${spec.hardware.keepers ? ' and keeper' : ''} takes about ${formatLength(need, u)}`, strap.id);
     const tw = strapProfile.endWidthMm;
     if (tw > b.insideWidthMm + HARDWARE_SLACK_MM.over)
       add('width-hardware-mismatch', `tip width ${formatLength(tw, u)} will not pass the buckle's ${formatLength(b.insideWidthMm, u)} inside width`, strap.id);
   }
   const lo = fit.rangeMm[0], hi = fit.rangeMm[1];
   const tol = spec.pieces.some((p) => p.end.kind === 'adjustable') ? 1e-6 : 3;
-  if (fit.targetMm < lo - tol || fit.targetMm > hi + tol)
-    add('fit-misses-target', `target ${formatLength(fit.targetMm, u)} lies outside the fit range ${formatLength(lo, u)} to ${formatLength(hi, u)} (${spec.mode} mode)`, strap.id);
+  const how = spec.mode === 'rule' ? 'by the shop rule' : 'fitted to the measure';
+  const holes = spec.pieces.some((p) => p.end.kind === 'adjustable');
+  if ((fit.targetMm < lo - tol || fit.targetMm > hi + tol) && !holes)
+    add('fit-misses-target', `the length ${how} gives ${formatLength(lo, u)}, not the girth${spec.easeMm ? ' plus ease' : ''} of ${formatLength(fit.targetMm, u)}`, strap.id);
+  else if (fit.targetMm < lo - tol || fit.targetMm > hi + tol)
+    add('fit-misses-target', `the girth${spec.easeMm ? ' plus ease' : ''}, ${formatLength(fit.targetMm, u)}, is outside what the holes fit, ${formatLength(lo, u)} to ${formatLength(hi, u)} (length ${spec.mode === 'rule' ? 'by the shop rule' : 'fitted to the measure'})`, strap.id);
   // A collar must not close tighter than the bare neck at the hole it is meant to be worn on
   // (bareNeckMm); the maker still checks with two fingers under it (common practice).
   const middle = fit.holes[fit.nominalIndex];
@@ -120,7 +124,7 @@ export function patternWarnings(spec: StrapSpec, strap: PieceLayout, fit: FitRep
         : `the ${formatLength(bare, u)} neck measured snug`;
     add(
       'collar-tight-at-nominal',
-      `at the middle hole (hole ${fit.nominalIndex + 1}) the collar is ${formatLength(middle.innerMm, u)} inside, ${formatLength(bare - middle.innerMm, u)} tighter than ${how}: it will choke. Lengthen the blank, or let the length come from the measure (fit mode)`,
+      `at the middle hole (hole ${fit.nominalIndex + 1}) the collar is ${formatLength(middle.innerMm, u)} inside, ${formatLength(bare - middle.innerMm, u)} tighter than ${how}: it will choke. Lengthen the blank, or fit the length to the measure`,
       strap.id,
     );
   }

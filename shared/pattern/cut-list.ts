@@ -1,4 +1,5 @@
 import type { StrapSpec } from '../schemas/strap-spec.ts';
+import { formatLength } from '../units/format-length.ts';
 import type { CutList, PieceLayout } from './layout-types.ts';
 
 /** Rivet post length = leather stack + 2-3 mm to set (common practice); we take the middle. */
@@ -12,9 +13,10 @@ export function cutList(spec: StrapSpec, pieces: readonly PieceLayout[], t: numb
   const blanks = pieces.map((p) => ({ pieceId: p.id, name: p.name, count: p.count, lengthMm: p.blankLengthMm, widthMm: p.widthMm, thicknessMm: t }));
   const hardware: CutList['hardware'] = [];
   const hw = spec.hardware;
-  if (hw.buckle.style !== 'none') hardware.push({ item: `${hw.buckle.style} buckle`, count: 1, note: `inside width ${hw.buckle.insideWidthMm.toFixed(1)} mm` });
-  if (hw.dRings.count) hardware.push({ item: 'D-ring', count: hw.dRings.count, note: `inside width ${hw.dRings.insideWidthMm.toFixed(1)} mm` });
-  if (hw.clips?.count) hardware.push({ item: hw.clips.kind.replace('-', ' '), count: hw.clips.count, note: `eye inside width ${hw.clips.insideWidthMm.toFixed(1)} mm` });
+  const len = (mm: number) => formatLength(mm, spec.units);
+  if (hw.buckle.style !== 'none') hardware.push({ item: `${hw.buckle.style} buckle`, count: 1, note: `inside width ${len(hw.buckle.insideWidthMm)}` });
+  if (hw.dRings.count) hardware.push({ item: 'D-ring', count: hw.dRings.count, note: `inside width ${len(hw.dRings.insideWidthMm)}` });
+  if (hw.clips?.count) hardware.push({ item: hw.clips.kind.replace('-', ' '), count: hw.clips.count, note: `eye inside width ${len(hw.clips.insideWidthMm)}` });
   const keeperPieces = pieces.filter((p) => p.role === 'accessory').reduce((s, p) => s + p.count, 0);
   if (hw.keepers > keeperPieces) hardware.push({ item: 'keeper (not cut here)', count: hw.keepers - keeperPieces });
   const fastenerMap = new Map<string, CutList['fasteners'][number]>();

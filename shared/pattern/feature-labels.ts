@@ -112,7 +112,7 @@ export function pieceLabels(piece: PieceLayout, ps: PieceSpec, u: 'in' | 'mm', e
     const run = stations.slice(i, j + 1);
     const total = run.reduce((s, st) => s + st.count, 0);
     const isAdjust = run[0]!.features[0]!.kind === 'adjust-hole';
-    const nominalNote = isAdjust && nominal !== undefined && adjust.length > 1 ? `, no. ${nominal + 1} nominal` : '';
+    const nominalNote = isAdjust && nominal !== undefined && adjust.length > 1 ? `, no. ${nominal + 1} the middle hole` : '';
     const text = `${total > 1 ? `${total} x ` : ''}${run[0]!.text}${nominalNote}`;
     const from = run[0]!.atMm, to = run[run.length - 1]!.atMm;
     above.push({ x: (from + to) / 2, text });
@@ -161,7 +161,7 @@ export function pieceLabels(piece: PieceLayout, ps: PieceSpec, u: 'in' | 'mm', e
   const buckleEnd = ps.start.kind === 'fold-over';
   const legend: string[] = [`Distances in ${u === 'in' ? 'inches' : 'mm'} from 0${buckleEnd ? ' at the buckle end' : ' at this end'}; the last is the blank's end.`];
   if (piece.fit && adjust.length) {
-    const fits = piece.fit.holes.map((h, i) => `${formatLengthBare(h.innerMm, u)}${i === piece.fit!.nominalIndex ? ' (nominal)' : ''}`);
+    const fits = piece.fit.holes.map((h, i) => `${formatLengthBare(h.innerMm, u)}${i === piece.fit!.nominalIndex ? ' (middle hole)' : ''}`);
     legend.push(`Holes 1-${fits.length} fit ${fits.join(', ')} ${u} inside.`);
   }
   if (piece.stitchRows.length) {

@@ -18,11 +18,12 @@ export function ruleVsFit(spec: StrapSpec, strap: PieceSpec, ruleL: number, fitL
   const f = side(fitL);
   const holeShiftMm = (f.nominalAtMm ?? fitL) - (r.nominalAtMm ?? ruleL);
   const target = spec.girthMm + spec.easeMm;
-  const where = strap.end.kind === 'adjustable' ? 'at the nominal hole the inside length' : spec.closes ? 'closed, the inside length' : 'the working length';
-  const dev = (d: number) => (Math.abs(d) < 0.05 ? 'on target' : `${formatLength(Math.abs(d), u)} ${d < 0 ? 'tighter' : 'looser'} than ${formatLength(target, u)}`);
+  const where = strap.end.kind === 'adjustable' ? 'at the middle hole the inside length' : spec.closes ? 'closed, the inside length' : 'the working length';
+  const aim = spec.easeMm ? 'the girth plus ease' : 'the girth';
+  const dev = (d: number) => (Math.abs(d) < 0.05 ? `exactly ${aim}` : `${formatLength(Math.abs(d), u)} ${d < 0 ? 'tighter' : 'looser'} than ${aim}, ${formatLength(target, u)}`);
   const summary =
-    `Rule: blank ${formatLength(ruleL, u)}; ${where} is ${formatLength(r.nominalInnerMm ?? 0, u)} (${dev(r.dev)}). ` +
-    `Fit: blank ${formatLength(fitL, u)} (${fitL >= ruleL ? '+' : '-'}${formatLength(Math.abs(fitL - ruleL), u)})` +
+    `By the shop rule: blank ${formatLength(ruleL, u)}; ${where} is ${formatLength(r.nominalInnerMm ?? 0, u)} (${dev(r.dev)}). ` +
+    `Fitted to the measure: blank ${formatLength(fitL, u)} (${fitL >= ruleL ? '+' : '-'}${formatLength(Math.abs(fitL - ruleL), u)})` +
     (strap.end.kind === 'adjustable' ? `, holes move ${formatLength(Math.abs(holeShiftMm), u)} ${holeShiftMm >= 0 ? 'toward the tip' : 'toward the buckle'}.` : '.');
   const strip = ({ dev: _d, ...rest }: typeof r) => rest;
   return { rule: strip(r), fit: strip(f), blankDeltaMm: fitL - ruleL, holeShiftMm, summary };

@@ -1,6 +1,7 @@
 import type { PieceSpec } from '../schemas/strap-spec.ts';
 import { chainStretch, chainXRange, crossingsAtX, directionAlong, pointAlong, reverseStretch, spanLength, type ChainPlace, type PrimSpan } from './chain-path.ts';
 import { fieldError, lengthIn, MM_WORDING, type Wording } from './engine-error.ts';
+import { specLabel } from '../schemas/spec-labels.ts';
 import type { StitchRowLayout, Warning } from './layout-types.ts';
 import { insetChain } from './offset.ts';
 import type { Prim, Pt } from './prims.ts';
@@ -119,7 +120,7 @@ export function layoutStitchRow(row: Row, profile: WidthProfile, outline: readon
     }
     const offPct = (Math.abs(worst - row.pitchMm) / row.pitchMm) * 100;
     if (offPct > row.tolerancePct + 1e-9)
-      warnings.push({ code: 'stitch-pitch-off', pieceId, message: `stitch row ${field}: pitch ${row.pitchMm} mm had to become ${worst.toFixed(2)} mm (${offPct.toFixed(1)} %, tolerance ${row.tolerancePct} %)` });
+      warnings.push({ code: 'stitch-pitch-off', pieceId, message: `${specLabel(field, w)}: pitch ${row.pitchMm} mm had to become ${worst.toFixed(2)} mm (${offPct.toFixed(1)} %, tolerance ${row.tolerancePct} %)` });
     rows.push({ points, holes, pitchMm: row.pitchMm, adjustedPitchMm: worst, seamLengthMm: seam, threadMm: THREAD_PER_SEAM * seam });
   }
   // Both edges run into one point (the tip of a spear or English point, a round end's apex, or
