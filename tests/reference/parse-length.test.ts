@@ -5,6 +5,7 @@ import Fraction from 'fraction.js';
 import { describe, expect, it } from 'vitest';
 import { parseLength } from '@shared/units/parse-length.ts';
 import { lengthProblem, textToLengthMm } from '@/components/form/length-text.ts';
+import { girthMmOf } from '../../server/modules/downloads/customer-girth.ts';
 
 const mmOf = (text: string, unit: 'in' | 'mm' = 'in') => {
   const r = parseLength(text, unit);
@@ -53,5 +54,12 @@ describe('typed lengths (fraction.js and convert-units as reference)', () => {
     expect(lengthProblem('Girth', '15x', 'in')).toBe('Girth: "15x" is not a length (units: in, mm, cm); type e.g. 15 1/2, 15½ or 394 mm');
     expect(lengthProblem('Girth', 'about 15', 'in')).toBe('Girth: "about 15" is not a length; type e.g. 15 1/2, 15½ or 394 mm');
     expect(lengthProblem('Girth', '15-1/2', 'in')).toBeNull();
+  });
+
+  it('when an apprentice types a customer girth of 15½ or 15-1/2 for a print, then it is 15 1/2 in (the same parser)', () => {
+    expect(girthMmOf('15½', 'in')).toBeCloseTo(inchesRef('15 1/2'), 3);
+    expect(girthMmOf('15-1/2', 'in')).toBeCloseTo(inchesRef('15 1/2'), 3);
+    expect(girthMmOf('394', 'mm')).toBe(394);
+    expect(girthMmOf('wide', 'in')).toBeUndefined();
   });
 });

@@ -6,19 +6,15 @@ import { specAtGirth } from '@shared/pattern/spec-at-girth.ts';
 import { GIRTH_MAX_MM, GIRTH_MIN_MM } from '@shared/schemas/strap-spec-limits.ts';
 import { StrapSpecSchema, type StrapSpec } from '@shared/schemas/strap-spec.ts';
 import { formatLength } from '@shared/units/format-length.ts';
-import { MM_PER_IN } from '@shared/units/length.ts';
+import { parseLength } from '@shared/units/parse-length.ts';
 import { HttpError } from '../../http/http-error.ts';
-import { parseLengthMm } from '../print/units.ts';
 
 const refuse = (message: string) => new HttpError(400, 'invalid_input', message, { girth: message });
 
-/** A girth as typed: "14in", "355.6mm", "13 1/2in"; a bare number is in the pattern's unit. */
+/** A girth as typed: "14in", "355.6mm", "13 1/2in", "15½", "15-1/2"; a bare number is in the pattern's unit. */
 export function girthMmOf(text: string, unit: StrapSpec['units']): number | undefined {
-  const withUnit = parseLengthMm(text);
-  if (withUnit !== undefined) return withUnit;
-  const bare = /^\s*\d+(?:\.\d+)?\s*$/.test(text) ? Number(text) : NaN;
-  if (!Number.isFinite(bare)) return undefined;
-  return unit === 'in' ? bare * MM_PER_IN : bare;
+  const r = parseLength(text, unit);
+  return r.ok ? r.mm : undefined;
 }
 
 /**
