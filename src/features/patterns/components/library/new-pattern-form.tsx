@@ -4,6 +4,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
 import { NoteSchema, PatternKindSchema, PatternNameSchema, TagsSchema } from '@shared/schemas/library.ts';
 import { PRESET_NAMES, type PresetName } from '@shared/schemas/strap-spec.ts';
+import { presetVariant } from '@shared/pattern/presets/index.ts';
 import { applyServerErrors } from '@/lib/form-errors.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
@@ -21,6 +22,8 @@ const NewPatternSchema = z.object({
   note: NoteSchema,
 });
 
+const DEFAULT_NOTE = 'Started from the shop’s standard.';
+
 /**
  * Starts a pattern: pick the kind, name it, and revision 1 is saved from the shop's standard
  * for that kind (the built-in preset where the shop has set none).
@@ -28,17 +31,22 @@ const NewPatternSchema = z.object({
 export function NewPatternForm({ initialKind, onCreated }: { initialKind: PresetName; onCreated: (id: number) => void }) {
   const create = useCreatePattern();
   const [formError, setFormError] = useState<string>();
+  // A bag strap is made at one length or with a buckle to adjust it; the adjustable one starts
+  // from the built-in adjustable preset (the shop's standard describes the fixed one).
+  const [bagStrap, setBagStrap] = useState<'fixed' | 'adjustable'>('fixed');
   const { register, handleSubmit, setError, formState, control } = useForm({
     resolver: zodResolver(NewPatternSchema),
-    defaultValues: { kind: initialKind, name: '', tags: '', note: 'Started from the shop’s standard.' },
+    defaultValues: { kind: initialKind, name: '', tags: '', note: DEFAULT_NOTE },
   });
   const kind = useWatch({ control, name: 'kind' });
 
   const onSubmit = handleSubmit(async (v) => {
     setFormError(undefined);
     try {
-      const spec = { ...(await fetchStartSpec(v.kind)).spec, name: v.name };
-      const created = await create.mutateAsync({ name: v.name, kind: v.kind, spec, note: v.note, tags: v.tags });
+      const start = v.kind === 'bag-strap' && bagStrap === 'adjustable' ? presetVariant('bag-strap', 'adjustable') : (await fetchStartSpec(v.kind)).spec;
+      const spec = { ...start, name: v.name };
+      const note = v.note === DEFAULT_NOTE && v.kind === 'bag-strap' && bagStrap === 'adjustable' ? 'Started from the built-in adjustable bag strap.' : v.note;
+      const created = await create.mutateAsync({ name: v.name, kind: v.kind, spec, note, tags: v.tags });
       onCreated(created.pattern.id);
     } catch (err) {
       setFormError(applyServerErrors(err, setError, ['name', 'kind', 'tags', 'note']));
@@ -72,6 +80,21 @@ export function NewPatternForm({ initialKind, onCreated }: { initialKind: Preset
           ))}
         </div>
       </fieldset>
+      {kind === 'bag-strap' && (
+        <fieldset>
+          <legend className="mb-2 text-sm font-medium text-hide-900">Bag strap length</legend>
+          <div className="flex flex-wrap gap-4 text-sm text-hide-900">
+            <label className="flex items-center gap-2">
+              <input type="radio" name="bag-strap-length" className="accent-hide-700" checked={bagStrap === 'fixed'} onChange={() => setBagStrap('fixed')} />
+              One length (the shop’s standard)
+            </label>
+            <label className="flex items-center gap-2">
+              <input type="radio" name="bag-strap-length" className="accent-hide-700" checked={bagStrap === 'adjustable'} onChange={() => setBagStrap('adjustable')} />
+              Adjustable: buckle and holes, swivel snaps at the ends
+            </label>
+          </div>
+        </fieldset>
+      )}
       <div className="grid gap-4 sm:grid-cols-2">
         <TextField label="Pattern name" placeholder="Collar for Juniper" {...register('name')} error={formState.errors.name?.message} />
         <TextField label="Tags" hint="Separate with commas." placeholder="dogs, bridle" {...register('tags')} error={formState.errors.tags?.message} />
