@@ -39,7 +39,7 @@ describe('pattern history and sharing in the browser', () => {
   it('when the waist changes from 34 in to 36 in and is saved, then history lists both revisions newest first', async () => {
     await page.goto(`${server.url}/patterns/${id}`);
     await page.getByTestId('drawing-preview').locator('svg').waitFor();
-    await page.getByLabel('Girth').fill('36');
+    await page.getByLabel(/^Girth \((in|mm)\)/).fill('36');
     await page.getByLabel('Note for this revision').fill('Tobias: waist now 36 in.');
     await page.getByRole('button', { name: 'Save revision 2' }).click();
     await page.getByText('Saved as revision 2.').waitFor();
@@ -58,8 +58,13 @@ describe('pattern history and sharing in the browser', () => {
     const row = params.locator('tr').filter({ has: page.getByRole('rowheader', { name: 'Girth', exact: true }) });
     expect(await params.textContent()).not.toContain('girthMm');
     await expect(row.locator('td').allTextContents()).resolves.toEqual(['34 in', '36 in']);
+    // The panel says which unit its lengths are in: the shop's display unit, not the stored mm.
+    await page.getByText('Lengths in inches').waitFor();
     // Belt size = bar to middle hole = waist + 2 in (common practice): the holes move by the waist change.
-    await expect(page.getByTestId('compare-moved').first().textContent()).resolves.toContain('+2 in');
+    const moved = page.getByTestId('compare-moved').first();
+    await expect(moved.textContent()).resolves.toContain('+2 in');
+    // Holes count from 1 at the buckle end; the belt preset's middle hole is the 3rd of 5.
+    await moved.locator('li', { hasText: 'hole 3 (middle):' }).filter({ hasText: '(+2 in)' }).waitFor();
     await snap(page, 'history-02-compare');
   });
 
@@ -78,7 +83,7 @@ describe('pattern history and sharing in the browser', () => {
   it('when someone else saves while the form is open, then saving shows who won, keeps the form, and saving on top works', async () => {
     await page.goto(`${server.url}/patterns/${id}`);
     await page.getByTestId('drawing-preview').locator('svg').waitFor();
-    await page.getByLabel('Girth').fill('35');
+    await page.getByLabel(/^Girth \((in|mm)\)/).fill('35');
     // Another save lands on revision 3 first (RFC 9110 If-Match on the head's strong ETag).
     const head = await page.request.get(`${server.url}/api/patterns/${id}`);
     const etag = head.headers()['etag'] ?? '';
@@ -88,7 +93,7 @@ describe('pattern history and sharing in the browser', () => {
 
     await page.getByRole('button', { name: 'Save revision 4' }).click();
     await page.getByText('Revision 4 was saved while you were editing').waitFor();
-    expect(await page.getByLabel('Girth').inputValue()).toBe('35');
+    expect(await page.getByLabel(/^Girth \((in|mm)\)/).inputValue()).toBe('35');
     await snap(page, 'history-04-conflict');
     await page.getByRole('button', { name: 'Keep my changes, save on top of 4' }).click();
     await page.getByRole('button', { name: 'Save revision 5' }).click();
@@ -271,6 +276,6 @@ describe('pattern history and sharing in the browser', () => {
     await page.getByRole('heading', { level: 1, name: 'Casual belt, Tobias (copy)' }).waitFor();
     expect(new URL(page.url()).pathname).not.toBe(`/patterns/${id}`);
     await expect(page.getByTestId('head-revision').textContent()).resolves.toContain('Revision 1');
-    expect(await page.getByLabel('Girth').inputValue()).toBe('34');
+    expect(await page.getByLabel(/^Girth \((in|mm)\)/).inputValue()).toBe('34');
   });
 });
