@@ -1,6 +1,7 @@
 // End-to-end: the owner starts a collar from its preset, changes the girth and watches the
 // in-browser preview redraw, saves with a note, invites an apprentice who accepts from the
-// fake mailbox, and the apprentice can read and print but not edit.
+// fake mailbox, and the apprentice gets the bench (drawing, summary, Print) with the values
+// folded away and read-only.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { startTestServer } from '../helpers/test-server.ts';
@@ -69,7 +70,7 @@ describe('the pattern library in the browser', () => {
 
   it('when the girth changes from 13 in to 15 in, then the preview redraws with a 2 in longer blank (blank = neck + 8 in, common practice)', async () => {
     const before = await page.getByTestId('drawing-preview').innerHTML();
-    const girth = page.getByLabel('Girth');
+    const girth = page.getByLabel(/^Girth \((in|mm)\)/);
     await girth.fill('15');
     await page.waitForFunction(() => document.querySelector('[data-testid="strap-blank"] strong')?.textContent === '23 in');
     const after = await page.getByTestId('drawing-preview').innerHTML();
@@ -92,47 +93,62 @@ describe('the pattern library in the browser', () => {
 
   it('when lengths are shown in millimetres, then the 15 in girth reads 381 (1 in = 25.4 mm, 1959 agreement) and the labels say mm', async () => {
     await page.getByLabel('Show lengths in').selectOption('mm');
-    await expect.poll(() => page.getByLabel('Girth').inputValue()).toBe('381');
+    await expect.poll(() => page.getByLabel(/^Girth \((in|mm)\)/).inputValue()).toBe('381');
     // Every length field names its unit in its label (and so in its accessible name).
     await page.getByLabel('Girth (mm)', { exact: true }).waitFor();
     await expect.poll(() => blankText(page)).toBe('584.2 mm');
     await snap(page, 'library-05c-millimetres');
     await page.getByLabel('Show lengths in').selectOption('in');
-    await expect.poll(() => page.getByLabel('Girth').inputValue()).toBe('15');
+    await expect.poll(() => page.getByLabel(/^Girth \((in|mm)\)/).inputValue()).toBe('15');
   });
 
-  it('when the length comes from fit instead of the rule, then the nominal hole closes on girth + ease within 1/32 in', async () => {
+  it('when the length comes from fit instead of the rule, then the middle hole closes on girth + ease within 1/32 in', async () => {
     await page.getByLabel('Length from').selectOption('fit');
-    const nominal = page.getByTestId('fit-table').locator('tr[aria-current="true"]');
-    // Fit mode puts the nominal hole at the target inside length (TRADE.md: the buckle lands on the middle hole).
-    await expect.poll(async () => (await nominal.locator('td').nth(3).textContent())?.trim()).toBe('±0');
+    const table = page.getByTestId('fit-table');
+    const middle = table.locator('tr[aria-current="true"]');
+    // Fit mode puts the middle hole at the target inside length (TRADE.md: the buckle lands on the middle hole).
+    await expect.poll(async () => (await middle.locator('td').nth(3).textContent())?.trim()).toBe('±0');
+    // Five holes, counted from 1 at the buckle: the middle one is hole 3, and the table says so in words.
+    await expect(middle.locator('th').textContent()).resolves.toBe('3middle hole');
+    // Girth 15 in + ease 0: the middle hole's inside length is the girth itself.
+    await expect(middle.locator('td').nth(2).textContent()).resolves.toBe('15 in');
+    await table.getByRole('columnheader', { name: 'Inside vs girth + ease' }).waitFor();
     await page.getByTestId('rule-vs-fit').getByText('Fit (in use)').waitFor();
     await snap(page, 'library-05d-fit-mode');
     await page.getByLabel('Length from').selectOption('rule');
     await expect.poll(() => blankText(page)).toBe('23 in');
   });
 
-  it('when the girth is not a length or is below the limit, then the field and the preview name it and saving waits', async () => {
-    const girth = page.getByLabel('Girth');
+  it('when the girth is not a length or is below the limit, then the field and the preview name it by its label in inches and saving waits', async () => {
+    const girth = page.getByLabel(/^Girth \((in|mm)\)/);
+    const problems = page.getByTestId('draft-problems');
     await girth.fill('thirteen');
-    await page.getByText('girth must be a number of mm').first().waitFor();
+    // The form shows inches, so the message asks for inches, beside the field and in the preview alike.
+    await page.getByText('Girth must be a length in inches', { exact: true }).first().waitFor();
+    await problems.getByText('Girth must be a length in inches', { exact: true }).waitFor();
     await expect(girth.getAttribute('aria-invalid')).resolves.toBe('true');
     expect(await page.getByRole('button', { name: 'Save revision 3' }).isDisabled()).toBe(true);
-    // The schema's own limit, quoted from shared/schemas/strap-spec-limits.ts (GIRTH_MIN_MM = 50).
+    // The schema's own limit, quoted from shared/schemas/strap-spec-limits.ts (GIRTH_MIN_MM = 50),
+    // in inches rounded up to the next 1/32: 50 / 25.4 = 1.9685 -> 1 31/32 in (1 in = 25.4 mm, 1959 agreement).
     await girth.fill('1');
-    await page.getByTestId('draft-problems').getByText('girth must be at least 50 mm').waitFor();
+    await problems.getByText('Girth must be at least 1 31/32 in', { exact: true }).waitFor();
+    expect(await page.getByText('Girth must be at least 1 31/32 in', { exact: true }).count()).toBe(2);
+    // No schema path or millimetre limit reaches the screen while the person works in inches.
+    expect(await problems.textContent()).not.toMatch(/girthMm|50 mm/);
     await snap(page, 'library-05e-girth-refused');
     await girth.fill('15');
     await expect.poll(() => blankText(page)).toBe('23 in');
   });
 
   it('when the built-in preset is loaded over an edited form, then it asks first, the form is back at 13 in and leaving asks first', async () => {
-    await page.getByLabel('Girth').fill('16');
+    await page.getByLabel(/^Girth \((in|mm)\)/).fill('16');
     await expect.poll(() => blankText(page)).toBe('24 in');
-    await page.getByRole('button', { name: 'Built-in preset' }).click();
+    const startAgain = page.getByTestId('start-values');
+    await startAgain.getByText('Start again from:').waitFor();
+    await startAgain.getByRole('button', { name: 'Built-in preset' }).click();
     await page.getByRole('alertdialog', { name: "Replace the form's values?" }).waitFor();
     await page.getByRole('button', { name: 'Replace the values' }).click();
-    await expect.poll(() => page.getByLabel('Girth').inputValue()).toBe('13');
+    await expect.poll(() => page.getByLabel(/^Girth \((in|mm)\)/).inputValue()).toBe('13');
     await expect.poll(() => blankText(page)).toBe('21 in');
     await page.getByRole('link', { name: 'Library' }).click();
     await page.getByRole('alertdialog', { name: 'Leave without saving?' }).waitFor();
@@ -202,18 +218,33 @@ describe('the pattern library in the browser', () => {
     await snap(p, 'library-10-apprentice-library');
   });
 
-  it('when the apprentice opens the collar, then every spec field is read-only, there is no save, and printing is offered', async () => {
+  it('when the apprentice opens the collar, then the bench and Print come first, the values are folded away and read-only, and there is no save', async () => {
     const p = otherPage;
     await p.getByRole('link', { name: 'Collar for Juniper' }).click();
     await p.getByTestId('drawing-preview').locator('svg').waitFor();
-    expect(await p.getByLabel('Girth').isDisabled()).toBe(true);
-    expect(await p.getByLabel('Strap width').isDisabled()).toBe(true);
-    expect(await p.getByRole('button', { name: /Save revision/ }).count()).toBe(0);
-    await p.getByText('Your role can read and print this pattern.').waitFor();
-    await p.getByRole('link', { name: 'Template PDF' }).waitFor();
     // The saved head (15 in neck) is what the apprentice sees: blank = 15 + 8 = 23 in (common practice).
     expect(await blankText(p)).toBe('23 in');
+    await p.getByTestId('bench-state').getByText('Your role can read and print this pattern.').waitFor();
+    const print = p.getByTestId('bench-print');
+    await p.getByRole('link', { name: 'Template PDF' }).waitFor();
+    // The values are folded away below the bench, not open as a form.
+    const fold = p.getByTestId('read-only-values');
+    expect(await fold.getAttribute('open')).toBeNull();
+    expect(await p.getByLabel(/^Girth \((in|mm)\)/).isVisible()).toBe(false);
+    const [printBox, foldBox] = await Promise.all([print.boundingBox(), fold.boundingBox()]);
+    expect(printBox!.y).toBeLessThan(foldBox!.y);
+    // Nothing offers to change or reload the values.
+    expect(await p.getByRole('button', { name: /Save revision/ }).count()).toBe(0);
+    expect(await p.getByTestId('start-values').count()).toBe(0);
     await snap(p, 'library-11-apprentice-read-only');
+    // Unfolded, every spec field reads the saved values and none can be changed.
+    await fold.getByText('All values of revision 2').click();
+    const girth = p.getByLabel(/^Girth \((in|mm)\)/);
+    await girth.waitFor();
+    expect(await girth.inputValue()).toBe('15');
+    expect(await girth.isDisabled()).toBe(true);
+    expect(await p.getByLabel('Strap width').isDisabled()).toBe(true);
+    await snap(p, 'library-11b-apprentice-values-unfolded');
   });
 
   it('when the apprentice tries to save through the API anyway, then the server refuses with 403', async () => {
@@ -231,7 +262,10 @@ describe('the pattern library in the browser', () => {
     await expect.poll(() => page.getByLabel(`Role of ${apprentice.name}`).inputValue()).toBe('maker');
     await otherPage.reload();
     await otherPage.getByTestId('drawing-preview').locator('svg').waitFor();
-    await expect.poll(() => otherPage.getByLabel('Girth').isDisabled()).toBe(false);
+    // A maker gets the open form: no fold, the girth shown and editable, and a save.
+    await expect.poll(() => otherPage.getByLabel(/^Girth \((in|mm)\)/).isEnabled()).toBe(true);
+    expect(await otherPage.getByLabel(/^Girth \((in|mm)\)/).isVisible()).toBe(true);
+    expect(await otherPage.getByTestId('read-only-values').count()).toBe(0);
     await otherPage.getByRole('button', { name: /Save revision/ }).waitFor();
   });
 

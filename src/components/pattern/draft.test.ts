@@ -23,10 +23,15 @@ describe('the live preview draft', () => {
     expect(b.svg).not.toBe(a.svg);
   });
 
-  it('when the girth is below the schema limit, then the draft stops and names girthMm with the limit', () => {
-    const draft = draftFrom({ ...presetSpec('collar'), girthMm: GIRTH_MIN_MM - 1 });
+  it('when the girth is below the schema limit, then the draft stops and names the field by its label with the limit in the unit shown', () => {
+    const collar = presetSpec('collar');
+    const draft = draftFrom({ ...collar, units: 'mm', girthMm: GIRTH_MIN_MM - 1 });
     expect(draft.status).toBe('stopped');
     if (draft.status !== 'stopped') return;
-    expect(draft.problems[0]).toEqual({ field: 'girthMm', message: `girth must be at least ${GIRTH_MIN_MM} mm` });
+    expect(draft.problems[0]).toEqual({ field: 'girthMm', message: `Girth must be at least ${GIRTH_MIN_MM} mm` });
+    // In inches the same limit rounds up to the next 1/32 in: 50 mm = 1.9685 in -> 1 31/32 in (1 in = 25.4 mm).
+    const inches = draftFrom({ ...collar, units: 'in', girthMm: GIRTH_MIN_MM - 1 });
+    if (inches.status !== 'stopped') throw new Error('the draft should stop');
+    expect(inches.problems[0]?.message).toBe('Girth must be at least 1 31/32 in');
   });
 });

@@ -3,9 +3,10 @@ import { drawLayout } from '@shared/pattern/draw-layout.ts';
 import { EngineError } from '@shared/pattern/engine-error.ts';
 import type { PatternLayout } from '@shared/pattern/layout-types.ts';
 import { renderSvg } from '@shared/render/svg.ts';
+import { specIssueMessages } from '@shared/schemas/spec-messages.ts';
 import { StrapSpecSchema, type StrapSpec } from '@shared/schemas/strap-spec.ts';
 
-/** A field that stops the drawing, with the schema's or the engine's sentence. */
+/** A field that stops the drawing (its path, to place it) and the sentence a person reads. */
 export interface DraftProblem {
   field: string;
   message: string;
@@ -23,9 +24,12 @@ export type Draft =
 export function draftFrom(values: unknown, opts: { revision?: string; dom?: { window: unknown; document: unknown } } = {}): Draft {
   const parsed = StrapSpecSchema.safeParse(values);
   if (!parsed.success) {
+    // The same words as the field's own message: its label, the limit in the form's unit.
     return {
       status: 'stopped',
-      problems: parsed.error.issues.slice(0, 6).map((i) => ({ field: i.path.map(String).join('.') || 'spec', message: i.message })),
+      problems: specIssueMessages(parsed.error, values)
+        .slice(0, 6)
+        .map((m) => ({ field: m.path || 'spec', message: m.message })),
     };
   }
   try {
