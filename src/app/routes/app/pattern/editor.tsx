@@ -7,6 +7,7 @@ import { patternQueryOptions } from '@/features/patterns/api/queries.ts';
 import { PatternHeader } from '@/features/patterns/components/pattern-header.tsx';
 import { PatternActions } from '@/features/patterns/components/pattern-actions.tsx';
 import { PatternEditor } from '@/features/patterns/components/editor/pattern-editor.tsx';
+import { PatternPhotos } from '@/features/patterns/components/pattern-photos.tsx';
 import { paths } from '../../../paths.ts';
 import { idFromParams, patternTabs } from './pattern-tabs.ts';
 
@@ -16,7 +17,7 @@ export const clientLoader = (queryClient: QueryClient): LoaderFunction => async 
   return null;
 };
 
-/** One pattern: its spec form beside the live preview, save, print. */
+/** One pattern: its spec form beside the live preview, save, print; photos of pieces made from it. */
 export function Component() {
   const id = idFromParams(useParams().id);
   const navigate = useNavigate();
@@ -32,6 +33,7 @@ export function Component() {
         actions={<PatternActions pattern={detail.pattern} headNumber={detail.head.number} canEdit={canEdit} onDuplicated={(copy) => navigate(paths.patterns.detail.getHref(copy))} />}
       />
       <PatternEditor key={id} detail={detail} canEdit={canEdit} canShare={me ? can(me.role, 'share.create') : false} />
+      <PatternPhotos key={`photos-${id}`} patternId={id} canUpload={me ? can(me.role, 'patterns.photos.upload') : false} canDelete={me ? can(me.role, 'patterns.photos.delete') : false} />
     </div>
   );
 }
