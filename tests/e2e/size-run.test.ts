@@ -179,14 +179,22 @@ describe('a size run in the browser', () => {
     // 2 in of collar leaves no room for 5 holes 3/4 in apart plus the tip (collar preset, common practice).
     const girth = page.getByLabel('Size 4 girth (in)');
     await girth.fill('2');
-    await page.getByText('tip holes run past the buckle end').first().waitFor();
+    // 5 holes 3/4 in apart with the first 3 in from the tip take 4 x 3/4 + 3 = 6 in (collar preset).
+    const tooShort = /Tip holes: 5 holes 3\/4 in apart need 6 in from the tip, .+ available before the buckle end/;
+    const runPanel = page.locator('section', { has: page.getByRole('heading', { name: 'Size run (4)' }) });
+    await runPanel.getByText(tooShort).waitFor();
+    // The run panel says which size to change, as the save's refusal does.
+    await expect(runPanel.getByText(tooShort).textContent()).resolves.toMatch(/^Size L \(2 in\): /);
     await page.getByLabel('Note for this revision').fill('Trying a toy size.');
     await page.getByRole('button', { name: 'Save revision 3' }).click();
     await expect.poll(() => girth.getAttribute('aria-invalid')).toBe('true');
     const describedBy = (await girth.getAttribute('aria-describedby')) ?? '';
     const message = (await page.locator(`[id="${describedBy}"]`).textContent()) ?? '';
-    // The server names the size and the engine's limit; the field path stays out of the sentence.
-    expect(message).toMatch(/^size L: tip holes run past the buckle end/);
+    // The server names the size beside its girth (in the unit shown) and the engine's limit;
+    // the field path stays out of the sentence.
+    expect(message).toMatch(/^Size L \(2 in\): /);
+    expect(message).toMatch(tooShort);
+    expect(message).not.toMatch(/sizes\.|girthMm|spec\./);
     await snap(page, 'size-run-07-size-refused');
     await girth.fill('16');
     await expect.poll(() => girth.getAttribute('aria-invalid')).toBeNull();

@@ -20,6 +20,13 @@ describe('grading the size run for the editor', () => {
     expect(run.report.joins[0]!.mm).toBeCloseTo(1 * IN, 2);
   });
 
+  it('when one size is too short for the five tip holes, then the run stops naming that size beside its girth (collar preset: 4 x 3/4 in + 3 in from the tip = 6 in)', () => {
+    const run = gradeRun(spec('collar', [{ name: 'S', girthMm: 12 * IN }, { name: 'L', girthMm: 2 * IN }]));
+    expect(run?.status).toBe('stopped');
+    if (run?.status !== 'stopped') return;
+    expect(run.message).toMatch(/^Size L \(2 in\): Tip holes: 5 holes 3\/4 in apart need 6 in from the tip/);
+  });
+
   it('when the strap has no adjustment holes (bag strap), then the run stops with a sentence on the sizes field', () => {
     const run = gradeRun(spec('bag-strap', [{ name: 'Short', girthMm: 1000 }, { name: 'Long', girthMm: 1200 }]));
     expect(run).toMatchObject({ status: 'stopped', field: 'sizes' });

@@ -1,6 +1,7 @@
-import { gradeSizes, type SizeRunReport } from '@shared/pattern/index.ts';
+import { computeLayout, gradeSizes, specAtGirth, type SizeRunReport } from '@shared/pattern/index.ts';
 import { EngineError } from '@shared/pattern/engine-error.ts';
 import type { StrapSpec } from '@shared/schemas/strap-spec.ts';
+import { formatLength } from '@shared/units/format-length.ts';
 
 /** The run graded by the engine, or the sentence that stopped it. */
 export type SizeRunResult = { status: 'graded'; report: SizeRunReport } | { status: 'stopped'; field: string; message: string };
@@ -15,7 +16,23 @@ export function gradeRun(spec: StrapSpec): SizeRunResult | null {
   try {
     return { status: 'graded', report: gradeSizes(spec, spec.sizes) };
   } catch (err) {
-    if (err instanceof EngineError) return { status: 'stopped', field: err.field, message: err.message };
+    if (err instanceof EngineError) return { status: 'stopped', field: err.field, message: sizeThatStops(spec) + err.message };
     return { status: 'stopped', field: 'sizes', message: err instanceof Error ? err.message : String(err) };
   }
+}
+
+/**
+ * "Size L (2 in): " for the first size that cannot be drawn on its own, as the server's
+ * refused save says it, so the run panel names which size to change; '' if none alone fails.
+ */
+function sizeThatStops(spec: StrapSpec): string {
+  const size = spec.sizes.find((s) => {
+    try {
+      computeLayout(specAtGirth(spec, { sizeName: s.name }));
+      return false;
+    } catch {
+      return true;
+    }
+  });
+  return size ? `Size ${size.name} (${formatLength(size.girthMm, spec.units)}): ` : '';
 }

@@ -18,6 +18,7 @@ import { useLiveDraft } from './use-live-draft.ts';
 import { SavePanel, type Conflict } from './save-panel.tsx';
 import { SharePanel } from './share-panel.tsx';
 import { LeaveGuard } from './leave-guard.tsx';
+import { sameSpec } from './same-spec.ts';
 
 export interface PatternEditorProps {
   detail: PatternDetail;
@@ -47,6 +48,8 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
   const values = useWatch({ control: form.control });
   const blocked = !StrapSpecSchema.safeParse(values).success;
   const live = useLiveDraft(values, String(base.number));
+  // isDirty alone stays true after a save of a size run (see sameSpec); both must agree.
+  const dirty = form.formState.isDirty && !sameSpec(values, form.formState.defaultValues);
 
   // The server's messages already name the field by its label ("Size L (10 in): Tip holes: ...");
   // a save's or a trial print's refusal of `spec.<path>` goes beside that field.
@@ -84,7 +87,7 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
   const savePanel = canEdit && (
     <Panel title="Save">
       <SavePanel
-        dirty={form.formState.isDirty}
+        dirty={dirty}
         blocked={blocked}
         saving={save.isPending}
         baseNumber={base.number}
@@ -120,7 +123,7 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
 
   return (
     <>
-      <LeaveGuard dirty={canEdit && form.formState.isDirty} />
+      <LeaveGuard dirty={canEdit && dirty} />
       <BenchLayout
         readOnly={!canEdit}
         bench={
@@ -134,7 +137,7 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
                 <span className="text-xs text-hide-600" data-testid="bench-state">
                   {!canEdit
                     ? 'Your role can read and print this pattern. A maker or the owner changes it.'
-                    : form.formState.isDirty
+                    : dirty
                       ? `Changed since revision ${base.number}, not saved`
                       : `Revision ${base.number}`}
                 </span>
@@ -148,7 +151,7 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
               <StartValuesBar
                 kind={detail.pattern.kind}
                 kindName={kindLabel(detail.pattern.kind).toLowerCase()}
-                dirty={form.formState.isDirty}
+                dirty={dirty}
                 // Keep the maker's name for the piece; everything else comes from the standard or preset.
                 onLoad={(start) => form.reset({ ...start, name: form.getValues('name') ?? start.name }, { keepDefaultValues: true })}
               />
@@ -169,7 +172,7 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
               revisionNumber={base.number}
               unit={savedSpec.units}
               sizes={savedSpec.sizes.map((s) => s.name)}
-              dirty={canEdit && form.formState.isDirty}
+              dirty={canEdit && dirty}
               {...(canEdit ? { trial: { patternId: id, values: () => form.getValues(), sizes: (values.sizes ?? []).map((s) => s?.name ?? ''), blocked, onSpecErrors: placeSpecErrors } } : {})}
             />
           </Panel>
