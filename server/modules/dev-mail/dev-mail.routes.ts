@@ -5,8 +5,8 @@ import { Router, type RequestHandler } from 'express';
 import { route } from '../../http/allow.ts';
 import { requireRole } from '../../http/require-role.ts';
 import type { Mailbox, ReceivedMail } from '../mail/fake-smtp.ts';
+import escapeHtml from 'escape-html';
 
-const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 const linkify = (text: string) => escapeHtml(text).replace(/https?:\/\/[^\s<]+/g, (url) => `<a href="${url}">${url}</a>`);
 
 function page(messages: ReceivedMail[]): string {

@@ -1,7 +1,6 @@
 // The wording of our e-mails: plain text first, and a simple HTML twin with the same words.
 import type { Role } from '@shared/schemas/auth.ts';
-
-const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+import { mailHtml } from './mail-html.ts';
 
 const ROLE_WORDS: Record<Role, string> = {
   owner: 'an owner (everything, including members and invites)',
@@ -9,14 +8,6 @@ const ROLE_WORDS: Record<Role, string> = {
   apprentice: 'an apprentice (read the library and print templates)',
 };
 
-function html(paragraphs: string[], link: { href: string; label: string }, footer: string): string {
-  const body = paragraphs.map((p) => `<p style="margin:0 0 12px">${escapeHtml(p).replace(/\n/g, '<br>')}</p>`).join('\n');
-  return `<!doctype html><html><body style="font-family:'IBM Plex Sans',Arial,sans-serif;color:#2b2118;line-height:1.5;max-width:560px">
-${body}
-<p style="margin:18px 0"><a href="${escapeHtml(link.href)}" style="background:#7a4a24;color:#fff;padding:8px 14px;border-radius:4px;text-decoration:none">${escapeHtml(link.label)}</a></p>
-<p style="margin:0;font-size:13px;color:#6b5a4a">${escapeHtml(footer)}</p>
-</body></html>`;
-}
 
 /** The e-mail that carries an invite link. */
 export function inviteMail(p: { shopName: string; inviterName: string; role: Role; link: string; expiresAt: Date }) {
@@ -30,7 +21,7 @@ export function inviteMail(p: { shopName: string; inviterName: string; role: Rol
   return {
     subject,
     text: `${lines.join('\n\n')}\n\n${p.link}\n\n${footer}\n`,
-    html: html(lines, { href: p.link, label: `Join ${p.shopName}` }, footer),
+    html: mailHtml(lines, { href: p.link, label: `Join ${p.shopName}` }, footer),
   };
 }
 
@@ -45,6 +36,6 @@ export function revisionSavedMail(p: { patternName: string; number: number; auth
   return {
     subject,
     text: `${lines.join('\n\n')}\n\nSee it: ${p.link}\n\n${footer}\n`,
-    html: html(lines, { href: p.link, label: `Open revision ${p.number}` }, footer),
+    html: mailHtml(lines, { href: p.link, label: `Open revision ${p.number}` }, footer),
   };
 }

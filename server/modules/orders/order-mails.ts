@@ -1,15 +1,11 @@
 // The wording of the orders' e-mails: plain text first, and a simple HTML twin with the same
 // words. Never a field name or a path: what the person sees is what the page says.
-const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+import { mailHtml } from '../mail/mail-html.ts';
+
 const until = (d: Date) => d.toUTCString().replace(/:\d\d GMT$/, ' UTC');
 
 function mail(subject: string, lines: string[], link: { href: string; label: string }, footer: string) {
-  const paragraphs = lines.map((p) => `<p style="margin:0 0 12px">${escapeHtml(p).replace(/\n/g, '<br>')}</p>`).join('\n');
-  const html = `<!doctype html><html><body style="font-family:'IBM Plex Sans',Arial,sans-serif;color:#2b2118;line-height:1.5;max-width:560px">
-${paragraphs}
-<p style="margin:18px 0"><a href="${escapeHtml(link.href)}" style="background:#7a4a24;color:#fff;padding:8px 14px;border-radius:4px;text-decoration:none">${escapeHtml(link.label)}</a></p>
-<p style="margin:0;font-size:13px;color:#6b5a4a">${escapeHtml(footer)}</p>
-</body></html>`;
+  const html = mailHtml(lines, link, footer);
   return { subject, text: `${lines.join('\n\n')}\n\n${link.href}\n\n${footer}\n`, html };
 }
 
