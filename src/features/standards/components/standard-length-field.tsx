@@ -1,17 +1,17 @@
-import { useEffect, useState, type ReactNode } from 'react';
-import { useController, type Control, type FieldPath } from 'react-hook-form';
+import type { ReactNode } from 'react';
+import type { Control, FieldPath } from 'react-hook-form';
 import type { LengthUnit } from '@shared/units/length.ts';
 import type { ShopStandards, ShopStandardsInput } from '@shared/schemas/shop-standards.ts';
-import { TextField } from '@/components/ui/field.tsx';
-import { lengthToText, textMatches, textToLengthMm } from '@/components/form/length-text.ts';
+import { LengthField } from '@/components/form/length-field.tsx';
 
 export type StandardsControl = Control<ShopStandardsInput, unknown, ShopStandards>;
 
 /**
- * A length over a mm field of the standards form, in the Shop page's unit. `optional` fields
- * (a buckle's tongue, a rivet's post) go back to "not given" when emptied.
+ * A length over a mm field of the standards form, in the Shop page's unit: the editor's own
+ * LengthField (same parsing and wording). `optional` fields (a buckle's tongue, a rivet's post)
+ * go back to "not given" when emptied.
  */
-export function StandardLengthField({ control, name, label, unit, hint, optional, disabled, wrapperClassName }: {
+export function StandardLengthField(props: {
   control: StandardsControl;
   name: FieldPath<ShopStandardsInput>;
   label: ReactNode;
@@ -21,33 +21,5 @@ export function StandardLengthField({ control, name, label, unit, hint, optional
   disabled?: boolean;
   wrapperClassName?: string;
 }) {
-  const { field, fieldState } = useController({ control, name });
-  const mm = field.value as number | undefined;
-  const [text, setText] = useState(() => lengthToText(mm, unit));
-  useEffect(() => {
-    setText((current) => (textMatches(current, mm, unit) ? current : lengthToText(mm, unit)));
-  }, [mm, unit]);
-  return (
-    <TextField
-      label={label}
-      unit={unit}
-      hint={hint}
-      error={fieldState.error?.message}
-      name={field.name}
-      ref={field.ref}
-      value={text}
-      disabled={disabled}
-      inputMode="decimal"
-      autoComplete="off"
-      wrapperClassName={wrapperClassName}
-      onChange={(e) => {
-        setText(e.target.value);
-        field.onChange(optional && e.target.value.trim() === '' ? undefined : textToLengthMm(e.target.value, unit));
-      }}
-      onBlur={() => {
-        field.onBlur();
-        if (mm !== undefined && Number.isFinite(mm)) setText(lengthToText(mm, unit));
-      }}
-    />
-  );
+  return <LengthField {...props} />;
 }
