@@ -1,5 +1,6 @@
 import { fileURLToPath } from 'node:url';
 import PDFDocument from 'pdfkit';
+import { gatherPageContent } from './pdf-content-stream.ts';
 import { cacheFontWork, type CacheableFont } from './pdf-font-cache.ts';
 import { mmToPt } from './units.ts';
 
@@ -79,6 +80,7 @@ export function createDoc(meta: DocMeta): PDFKit.PDFDocument {
 /** Adds a page of the given size in mm with no pdfkit margins (we place everything). */
 export function addPageMm(doc: PDFKit.PDFDocument, widthMm: number, heightMm: number): void {
   doc.addPage({ size: [mmToPt(widthMm), mmToPt(heightMm)], margin: 0 });
+  gatherPageContent(doc);
 }
 
 /** Ends the document and collects its bytes. */

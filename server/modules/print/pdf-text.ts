@@ -21,10 +21,46 @@ function setFont(doc: PDFKit.PDFDocument, s: TextStyle): number {
   return sizePt;
 }
 
+/** The part of pdfkit 0.20's EmbeddedFont the caches below use. */
+interface EmbeddedFontLike {
+  /** The parsed fontkit font, one per process (pdf-doc.ts parses each font once). */
+  font: object;
+  widthOfString(text: string, size: number): number;
+}
+
+/** Most lines whose advance is remembered per font; past it the cache starts again. */
+const MAX_ADVANCES = 20_000;
+const advances = new WeakMap<object, Map<string, number>>();
+
+/**
+ * Advance of a line at 1000 pt in the document's current font. A line's width is linear in
+ * the size and the same in every document, so it is measured once per process: textMm and
+ * the fitting and wrapping around it measured each line two or three times per page, through
+ * pdfkit's word splitting and per-document caches (a tenth of a size run's PDF, CPU profile).
+ */
+function advance1000(doc: PDFKit.PDFDocument, text: string): number {
+  const font = (doc as unknown as { _font: EmbeddedFontLike })._font;
+  let byText = advances.get(font.font);
+  if (!byText) advances.set(font.font, (byText = new Map()));
+  let a = byText.get(text);
+  if (a === undefined) {
+    a = font.widthOfString(text, 1000);
+    if (byText.size >= MAX_ADVANCES) byText.clear();
+    byText.set(text, a);
+  }
+  return a;
+}
+
+/** Width in points of a line in the document's current font and size (doc.widthOfString without options). */
+export function widthPt(doc: PDFKit.PDFDocument, text: string): number {
+  // Same arithmetic as pdfkit's (width x size/1000), so positions keep their last digit.
+  return advance1000(doc, text) * ((doc as unknown as { _fontSize: number })._fontSize / 1000);
+}
+
 /** Width of a line of text in mm at a style. */
 export function textWidthMm(doc: PDFKit.PDFDocument, text: string, s: TextStyle): number {
   setFont(doc, s);
-  return doc.widthOfString(text) / mmToPt(1);
+  return widthPt(doc, text) / mmToPt(1);
 }
 
 /** Sets one line of text with its baseline at (x, y) mm on the page. Returns its width in mm. */
@@ -35,7 +71,7 @@ export function textMm(doc: PDFKit.PDFDocument, text: string, xMm: number, yMm: 
     if (w > s.maxWidthMm) s = { ...s, capMm: Math.max(s.capMm * 0.6, (s.capMm * s.maxWidthMm) / w) };
   }
   setFont(doc, s);
-  const wPt = doc.widthOfString(text);
+  const wPt = widthPt(doc, text);
   const shift = s.anchor === 'middle' ? wPt / 2 : s.anchor === 'end' ? wPt : 0;
   const x = mmToPt(xMm);
   const y = mmToPt(yMm);
@@ -68,6 +104,23 @@ function pdfNumber(n: number): number {
   throw new Error(`unsupported number: ${n}`);
 }
 
+type Encoded = [string[], GlyphPosition[]];
+const encodings = new WeakMap<object, Map<string, Encoded>>();
+
+/**
+ * The glyph ids and positions of a line, shaped once per document and font: the caution, the
+ * title rows and the rulers' figures repeat on every sheet. encode() also adds the glyphs to the
+ * document's subset, which the first call has done, so a repeat changes nothing in the file.
+ * Read only: setLine never changes what it is given.
+ */
+function encodeOnce(font: PdfkitInternals['_font'], text: string): Encoded {
+  let byText = encodings.get(font);
+  if (!byText) encodings.set(font, (byText = new Map()));
+  let e = byText.get(text);
+  if (!e) byText.set(text, (e = font.encode(text, undefined)));
+  return e;
+}
+
 /**
  * What `doc.text(text, x, y, { lineBreak: false, baseline: 'alphabetic' })` writes for one
  * line, operator for operator (pdfkit 0.20.2's _fragment), without the option handling,
@@ -89,7 +142,7 @@ function setLine(doc: PDFKit.PDFDocument, text: string, x: number, y: number): v
   d.addContent('BT');
   d.addContent(`1 0 0 1 ${pdfNumber(x)} ${pdfNumber(ty)} Tm`);
   d.addContent(`/${font.id} ${pdfNumber(d._fontSize)} Tf`);
-  const [encoded, positions] = font.encode(text, undefined);
+  const [encoded, positions] = encodeOnce(font, text);
   const scale = d._fontSize / 1000;
   const commands: string[] = [];
   let last = 0;

@@ -1,6 +1,7 @@
 import PDFDocument from 'pdfkit';
 import type { BoxMm, DrawingPiece, TextItem } from '@shared/render/drawing.ts';
 import { FONT, FONT_FILES } from './pdf-doc.ts';
+import { widthPt } from './pdf-text.ts';
 import { mmToPt } from './units.ts';
 
 // A document never written out, used only to measure text with the fonts we embed.
@@ -23,7 +24,7 @@ export function textBox(t: TextItem): BoxMm {
   const d = doc();
   const em = t.sizeMm; // the em, as SVG's font-size (shared/render/drawing.ts)
   d.font(t.weight === 'bold' ? FONT.bold : FONT.regular).fontSize(mmToPt(em));
-  const w = d.widthOfString(t.text) / mmToPt(1);
+  const w = widthPt(d, t.text) / mmToPt(1);
   const x0 = t.anchor === 'middle' ? -w / 2 : t.anchor === 'end' ? -w : 0;
   const corners = [
     [x0, -em * ASCENT],
