@@ -28,6 +28,8 @@ describe('the live preview draft', () => {
     const draft = draftFrom({ ...collar, units: 'mm', girthMm: GIRTH_MIN_MM - 1 });
     expect(draft.status).toBe('stopped');
     if (draft.status !== 'stopped') return;
+    // The schema refused it (the editor's save and trial print wait), not the engine.
+    expect(draft.by).toBe('schema');
     expect(draft.problems[0]).toEqual({ field: 'girthMm', message: `Girth must be at least ${GIRTH_MIN_MM} mm` });
     // In inches the same limit rounds up to the next 1/32 in: 50 mm = 1.9685 in -> 1 31/32 in (1 in = 25.4 mm).
     const inches = draftFrom({ ...collar, units: 'in', girthMm: GIRTH_MIN_MM - 1 });

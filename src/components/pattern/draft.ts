@@ -15,7 +15,8 @@ export interface DraftProblem {
 /** What the live preview shows for the form's current values. */
 export type Draft =
   | { status: 'drawn'; spec: StrapSpec; layout: PatternLayout; svg: string }
-  | { status: 'stopped'; problems: DraftProblem[] };
+  /** `by`: the schema refused a value (nothing to save or print yet), or the engine could not draw it. */
+  | { status: 'stopped'; by: 'schema' | 'engine'; problems: DraftProblem[] };
 
 /**
  * Runs the engine in the browser: validate with the shared schema, compute the Layout, draw
@@ -27,6 +28,7 @@ export function draftFrom(values: unknown, opts: { revision?: string; dom?: { wi
     // The same words as the field's own message: its label, the limit in the form's unit.
     return {
       status: 'stopped',
+      by: 'schema',
       problems: specIssueMessages(parsed.error, values)
         .slice(0, 6)
         .map((m) => ({ field: m.path || 'spec', message: m.message })),
@@ -40,7 +42,7 @@ export function draftFrom(values: unknown, opts: { revision?: string; dom?: { wi
     return { status: 'drawn', spec: parsed.data, layout, svg };
   } catch (err) {
     // Impossible geometry names its field and limit; anything else is a bug worth showing.
-    if (err instanceof EngineError) return { status: 'stopped', problems: [{ field: err.field, message: err.message }] };
-    return { status: 'stopped', problems: [{ field: 'spec', message: err instanceof Error ? err.message : String(err) }] };
+    if (err instanceof EngineError) return { status: 'stopped', by: 'engine', problems: [{ field: err.field, message: err.message }] };
+    return { status: 'stopped', by: 'engine', problems: [{ field: 'spec', message: err instanceof Error ? err.message : String(err) }] };
   }
 }

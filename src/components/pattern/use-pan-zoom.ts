@@ -57,8 +57,9 @@ export function usePanZoom(sizeMm: { w: number; h: number }, truePxPerMm: number
   // The whole drawing, centred in the box.
   const fitView = useCallback((): View => ({ mode: 'fit', scale: fitScale, x: (boxPx.w - sizeMm.w * fitScale) / 2, y: (boxPx.h - sizeMm.h * fitScale) / 2 }), [fitScale, boxPx.w, boxPx.h, sizeMm.w, sizeMm.h]);
 
-  // Fit follows the box and the drawing; the other modes stay where the user put them.
-  useEffect(() => {
+  // Fit follows the box and the drawing; the other modes stay where the user put them. A
+  // layout effect: a new drawing is never painted at the previous drawing's scale first.
+  useLayoutEffect(() => {
     setView((v) => (v.mode === 'fit' ? fitView() : v));
   }, [fitView]);
 

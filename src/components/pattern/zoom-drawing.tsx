@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { memo, useState } from 'react';
 import { cx } from '@/components/ui/cx.ts';
 import { CalibrateScreen } from './calibrate-screen.tsx';
 import { loadPxPerMm } from './screen-scale.ts';
@@ -19,7 +19,7 @@ const toolClass = 'h-8 min-w-8 px-2 text-sm font-medium text-hide-800 hover:bg-h
  * browser's calibrated px per mm. The markup comes from our own renderer, which escapes every
  * label, so it is safe to place as HTML.
  */
-export function ZoomDrawing({ svg, label, boxClassName = 'h-48 lg:h-72' }: ZoomDrawingProps) {
+export const ZoomDrawing = memo(function ZoomDrawing({ svg, label, boxClassName = 'h-48 lg:h-72' }: ZoomDrawingProps) {
   const sizeMm = svgSizeMm(svg);
   const [ratio, setRatio] = useState<number | null>(() => loadPxPerMm());
   const [calibrating, setCalibrating] = useState(false);
@@ -99,4 +99,4 @@ export function ZoomDrawing({ svg, label, boxClassName = 'h-48 lg:h-72' }: ZoomD
       )}
     </figure>
   );
-}
+});

@@ -1,11 +1,14 @@
-import { useState, type ReactNode } from 'react';
+import { memo, useState, type ReactNode } from 'react';
+import type { Draft } from '@/components/pattern/draft.ts';
 import { ZoomDrawing } from '@/components/pattern/zoom-drawing.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { BenchSummary } from './bench-summary.tsx';
-import type { LiveDraft } from './use-live-draft.ts';
 
 export interface BenchCardProps {
-  live: LiveDraft;
+  /** The form's values drawn in the keystroke's own render ({@link useLiveDraft}). */
+  draft: Draft;
+  /** The last drawing that worked, shown faded while the draft is stopped. */
+  lastSvg: string | null;
   /** Buttons at the card's foot (Print, and for makers the save state). */
   actions?: ReactNode;
 }
@@ -13,9 +16,9 @@ export interface BenchCardProps {
 /**
  * The bench: the drawing (zoom, pan, true size) and the summary, kept in view (sticky) while
  * the form scrolls. On a phone the drawing folds away to leave the summary and the actions.
+ * Memoized: it renders when the draft (or the actions) change, not for the details' render.
  */
-export function BenchCard({ live, actions }: BenchCardProps) {
-  const { draft, lastSvg } = live;
+export const BenchCard = memo(function BenchCard({ draft, lastSvg, actions }: BenchCardProps) {
   const [open, setOpen] = useState(true);
   return (
     <section aria-label="Preview" className="grid min-w-0 gap-2 rounded-lg border border-hide-200 bg-white p-3 shadow-md shadow-hide-900/10 sm:p-4" data-testid="bench-card">
@@ -49,4 +52,4 @@ export function BenchCard({ live, actions }: BenchCardProps) {
       {actions && <div className="flex flex-wrap items-center gap-2 border-t border-hide-100 pt-2">{actions}</div>}
     </section>
   );
-}
+});

@@ -1,4 +1,4 @@
-import { useEffect } from 'react';
+import { memo, useEffect } from 'react';
 import { useBlocker } from 'react-router-dom';
 import { Button } from '@/components/ui/button.tsx';
 
@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button.tsx';
  * Unsaved spec changes are a maker's work: leaving the pattern (a link, back, closing the
  * tab) asks first. Saving, or choosing to leave, lets the navigation through.
  */
-export function LeaveGuard({ dirty }: { dirty: boolean }) {
+export const LeaveGuard = memo(function LeaveGuard({ dirty }: { dirty: boolean }) {
   const blocker = useBlocker(({ currentLocation, nextLocation }) => dirty && currentLocation.pathname !== nextLocation.pathname);
 
   useEffect(() => {
@@ -35,4 +35,4 @@ export function LeaveGuard({ dirty }: { dirty: boolean }) {
       </div>
     </div>
   );
-}
+});

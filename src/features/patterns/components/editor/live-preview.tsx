@@ -1,3 +1,6 @@
+import { memo } from 'react';
+import type { Draft } from '@/components/pattern/draft.ts';
+import type { SizeRunResult } from '@/components/pattern/grade-run.ts';
 import { WarningsList } from '@/components/pattern/warnings-list.tsx';
 import { FitTable } from '@/components/pattern/fit-table.tsx';
 import { RuleVsFitPanel } from '@/components/pattern/rule-vs-fit.tsx';
@@ -6,15 +9,15 @@ import { SizeRunTable } from '@/components/pattern/size-run.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { Panel } from '@/components/ui/panel.tsx';
 import { BenchCard } from './bench-card.tsx';
-import { useLiveDraft, type LiveDraft } from './use-live-draft.ts';
+import { useLiveDraft } from './use-live-draft.ts';
 
 /**
  * What the engine says of the form's values beyond the drawing: the size run, warnings, the
  * fit at each hole, the shop rule beside the fitted length, and the cut list. The drawing and the summary live on
- * the bench card above ({@link BenchCard}).
+ * the bench card above ({@link BenchCard}). It is given the deferred draft (`settled` of
+ * {@link useLiveDraft}), so it renders after the keystroke's frame, not in it.
  */
-export function PreviewDetails({ live }: { live: LiveDraft }) {
-  const { draft, run } = live;
+export const PreviewDetails = memo(function PreviewDetails({ draft, run }: { draft: Draft; run: SizeRunResult | null }) {
   if (draft.status === 'stopped') return null;
   const { layout } = draft;
   const unit = layout.units;
@@ -49,15 +52,15 @@ export function PreviewDetails({ live }: { live: LiveDraft }) {
       </div>
     </div>
   );
-}
+});
 
 /** The drawing, summary and details of a spec that is only read (a saved revision's page). */
 export function LivePreview({ values, revisionLabel }: { values: unknown; revisionLabel?: string }) {
   const live = useLiveDraft(values, revisionLabel);
   return (
     <div className="grid min-w-0 grid-cols-[minmax(0,1fr)] gap-4">
-      <BenchCard live={live} />
-      <PreviewDetails live={live} />
+      <BenchCard draft={live.draft} lastSvg={live.lastSvg} />
+      <PreviewDetails draft={live.settled} run={live.run} />
     </div>
   );
 }

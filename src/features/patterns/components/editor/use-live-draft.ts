@@ -1,27 +1,36 @@
-import { useDeferredValue, useEffect, useMemo, useState } from 'react';
+import { useDeferredValue, useLayoutEffect, useMemo, useRef } from 'react';
 import { draftFrom, type Draft } from '@/components/pattern/draft.ts';
 import { gradeRun, type SizeRunResult } from '@/components/pattern/grade-run.ts';
 
 export interface LiveDraft {
+  /** The form's values drawn in the same render as the keystroke: the bench card shows it. */
   draft: Draft;
   /** The last drawing that worked, kept faded in view while a value is being fixed. */
   lastSvg: string | null;
-  /** The size run graded, when the spec has one. */
+  /**
+   * The draft the details below the bench show (warnings, fit, cut list): `draft` once React
+   * has a moment, a keystroke behind while typing is fast.
+   */
+  settled: Draft;
+  /** The size run of `settled` graded, when its spec has one. */
   run: SizeRunResult | null;
 }
 
 /**
- * The engine run in the browser on every change of the form. Deferred so typing never
- * waits for a draw; one run feeds the bench (drawing and summary) and the details below.
+ * The engine run in the browser on every change of the form. The drawing is computed in the
+ * keystroke's own render (a collar lays out and draws in well under a millisecond), so the
+ * preview changes in the next frame; the details and the size run's grading (one layout per
+ * size, up to 12) follow in a deferred render, so typing never waits for them.
  */
 export function useLiveDraft(values: unknown, revisionLabel?: string): LiveDraft {
-  const deferred = useDeferredValue(values);
-  const draft = useMemo(() => draftFrom(deferred, revisionLabel ? { revision: revisionLabel } : {}), [deferred, revisionLabel]);
-  const [lastSvg, setLastSvg] = useState<string | null>(null);
-  // One layout per size: graded only when the drawn spec changes.
-  const run = useMemo(() => (draft.status === 'drawn' ? gradeRun(draft.spec) : null), [draft]);
-  useEffect(() => {
-    if (draft.status === 'drawn') setLastSvg(draft.svg);
+  const draft = useMemo(() => draftFrom(values, revisionLabel ? { revision: revisionLabel } : {}), [values, revisionLabel]);
+  const settled = useDeferredValue(draft);
+  const run = useMemo(() => (settled.status === 'drawn' ? gradeRun(settled.spec) : null), [settled]);
+  // The last committed drawing: read only while the draft is stopped, so no render waits on it.
+  const lastDrawn = useRef<string | null>(null);
+  useLayoutEffect(() => {
+    if (draft.status === 'drawn') lastDrawn.current = draft.svg;
   }, [draft]);
-  return { draft, lastSvg, run };
+  const lastSvg = draft.status === 'drawn' ? draft.svg : lastDrawn.current;
+  return { draft, lastSvg, settled, run };
 }
