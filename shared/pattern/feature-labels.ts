@@ -7,17 +7,22 @@ import type { Feature, PieceLayout } from './layout-types.ts';
 
 // formatLength builds a Fraction for every inch value, and the same lengths recur on every
 // station, caption and redraw (a tenth of drawLayout's profile): their text is remembered.
-const lengthTexts = new Map<string, string>();
+// Keyed by the number itself, one map per unit and form: a string key made from the number
+// cost about as much as the lookup saved (rememberedLength was 2 % of a collar SVG's profile).
+const lengthTexts = { in: [new Map<number, string>(), new Map<number, string>()], mm: [new Map<number, string>(), new Map<number, string>()] };
 function rememberedLength(mm: number, u: 'in' | 'mm', bare: boolean): string {
-  const key = `${bare ? 'b' : 'f'}${u}${Object.is(mm, -0) ? '-0' : String(mm)}`;
-  let text = lengthTexts.get(key);
+  // A Map does not tell -0 from 0, whose texts may differ; -0 is rare, so it is not remembered.
+  if (Object.is(mm, -0)) return lengthText(mm, u, bare);
+  const texts = lengthTexts[u][bare ? 1 : 0]!;
+  let text = texts.get(mm);
   if (text === undefined) {
-    if (lengthTexts.size >= 4096) lengthTexts.clear();
-    text = bare ? formatLengthBareUnit(mm, u) : formatLengthUnit(mm, u);
-    lengthTexts.set(key, text);
+    if (texts.size >= 1024) texts.clear();
+    text = lengthText(mm, u, bare);
+    texts.set(mm, text);
   }
   return text;
 }
+const lengthText = (mm: number, u: 'in' | 'mm', bare: boolean) => (bare ? formatLengthBareUnit(mm, u) : formatLengthUnit(mm, u));
 const formatLength = (mm: number, u: 'in' | 'mm') => rememberedLength(mm, u, false);
 const formatLengthBare = (mm: number, u: 'in' | 'mm') => rememberedLength(mm, u, true);
 
@@ -30,9 +35,23 @@ const LANE_STEP_MM = (ASCENT_PER_EM + DESCENT_PER_EM) * LABEL_SIZE_MM + 0.6;
 export function featureText(f: Feature, u: 'in' | 'mm'): string {
   if (f.kind === 'slot') return `slot ${formatLength(f.lengthMm ?? 0, u)} x ${formatLength(f.widthMm ?? 0, u)}`;
   if (f.kind === 'fold') return f.label;
-  const what = f.kind === 'adjust-hole' ? 'hole' : (f.label.split(',')[0] ?? f.kind);
+  const what = f.kind === 'adjust-hole' ? 'hole' : firstClause(f.label);
   const layers = f.layers && f.layers > 1 ? `, ${f.layers} layers` : f.partnerAtMm === undefined && f.kind !== 'adjust-hole' ? ', 1 layer' : '';
-  return `Ø${formatLength(f.diameterMm ?? 0, u)} ${f.punch?.size ?? ''} ${what}${layers}`.replace(/\s+/g, ' ').trim();
+  const size = f.punch?.size ?? '';
+  const text = `Ø${formatLength(f.diameterMm ?? 0, u)} ${size ? `${size} ` : ''}${what}${layers}`;
+  // Whitespace is collapsed to one space and trimmed, but only when there is any to change:
+  // the replace made a new string for every label of every drawing (featureText was 2 % of a
+  // collar SVG's profile), and engine-made texts have none.
+  return UNEVEN_SPACE.test(text) ? text.replace(/\s+/g, ' ').trim() : text;
+}
+
+/** Whitespace that `replace(/\s+/g, ' ').trim()` would change: a run, a tab or the like, or at either end. */
+const UNEVEN_SPACE = /\s\s|[^\S ]|^\s|\s$/;
+
+/** A label up to its first comma ("rivet, 2 layers" -> "rivet"), as `split(',')[0]` gives it. */
+function firstClause(label: string): string {
+  const comma = label.indexOf(',');
+  return comma < 0 ? label : label.slice(0, comma);
 }
 
 interface Station {
@@ -51,7 +70,8 @@ function stationsOf(features: readonly Feature[], u: 'in' | 'mm'): Station[] {
   }
   return out.map((s) => {
     const texts = s.features.map((f) => featureText(f, u));
-    const uniq = [...new Set(texts)];
+    // Distinct texts in first-seen order, as a Set keeps them, without making one per station.
+    const uniq = texts.filter((t, i) => texts.indexOf(t) === i);
     // Several identical holes across the strap at one station read "2 x ..."; a fold and its slot "fold, slot ...".
     const text = uniq.length === 1 ? uniq[0]! : uniq.join(', ');
     return { atMm: s.atMm, features: s.features, text, count: uniq.length === 1 ? texts.length : 1 };
