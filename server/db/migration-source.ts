@@ -6,6 +6,7 @@ import * as accounts from '../../db/migrations/20261202023500_accounts.ts';
 import * as patternLibrary from '../../db/migrations/20261202041000_pattern_library.ts';
 import * as shopStandards from '../../db/migrations/20261203114000_shop_standards.ts';
 import * as orders from '../../db/migrations/20261203115500_orders.ts';
+import * as measureLinkRevoke from '../../db/migrations/20261203150500_measure_link_revoke.ts';
 
 interface Migration {
   up(knex: Knex): Promise<void>;
@@ -18,6 +19,7 @@ export const MIGRATIONS: ReadonlyArray<readonly [name: string, migration: Migrat
   ['20261202041000_pattern_library.ts', patternLibrary],
   ['20261203114000_shop_standards.ts', shopStandards],
   ['20261203115500_orders.ts', orders],
+  ['20261203150500_measure_link_revoke.ts', measureLinkRevoke],
 ];
 
 /** Knex `migrations.migrationSource` over {@link MIGRATIONS}. */

@@ -183,6 +183,8 @@ export interface MeasurementRequestView {
   expiresAt: string;
   answeredAt: string | null;
   expired: boolean;
+  /** Withdrawn by the shop: the customer's page answers as if it had run out. */
+  revoked: boolean;
 }
 
 /** `GET /api/orders/:id` -> `{ order: OrderDetail }` (also what create, update and stage moves answer). */

@@ -85,6 +85,7 @@ export const PERMISSIONS = {
   'orders.move': { method: 'POST', path: '/orders/:id/stage', actors: ALL },
   'orders.jobSheet': { method: 'GET', path: '/orders/:id/job-sheet.pdf', actors: ALL },
   'orders.requestMeasurement': { method: 'POST', path: '/orders/:id/measurement-request', actors: ALL },
+  'orders.measurementRequestRevoke': { method: 'DELETE', path: '/measurement-requests/:requestId', actors: ALL },
   'orders.proof': { method: 'POST', path: '/orders/:id/proof', actors: ALL },
   'orders.proofRevoke': { method: 'DELETE', path: '/proofs/:proofId', actors: ALL },
   'orders.photos.list': { method: 'GET', path: '/orders/:id/photos', actors: ALL },

@@ -70,6 +70,7 @@ export const ORDER_SAMPLES: Record<OrderAction, { scope: Scope; make: (c: Ctx) =
   'orders.move': { scope: 'pattern', make: async (c) => ({ path: `/api/orders/${await orderId(c)}/stage`, body: { stage: 'cut' } }) },
   'orders.jobSheet': { scope: 'pattern', make: async (c) => ({ path: `/api/orders/${await orderId(c)}/job-sheet.pdf?paper=a4` }) },
   'orders.requestMeasurement': { scope: 'pattern', make: async (c) => ({ path: `/api/orders/${await orderId(c)}/measurement-request`, body: {} }) },
+  'orders.measurementRequestRevoke': { scope: 'pattern', make: async (c) => ({ path: `/api/measurement-requests/${(await measureToken(c.t, await orderId(c), c.w.maker)).id}` }) },
   'orders.proof': { scope: 'pattern', make: async (c) => ({ path: `/api/orders/${await orderId(c)}/proof`, body: {} }) },
   'orders.proofRevoke': { scope: 'pattern', make: async (c) => ({ path: `/api/proofs/${(await proofLink(c.t, await orderId(c), c.w.maker)).id}` }) },
   'orders.photos.list': { scope: 'pattern', make: async (c) => ({ path: `/api/orders/${await orderId(c)}/photos` }) },

@@ -65,10 +65,10 @@ export async function proofLink(t: TestApp, orderId: number, by: Member): Promis
   return { token: res.body.token, id: res.body.proof.id };
 }
 
-/** Sends a measuring request for the order and reads its token from the fake mailbox. */
-export async function measureToken(t: TestApp, orderId: number, by: Member): Promise<{ token: string; mailText: string }> {
+/** Sends a measuring request for the order and reads its token from the fake mailbox (and the request's id from the answer). */
+export async function measureToken(t: TestApp, orderId: number, by: Member): Promise<{ token: string; mailText: string; id: number }> {
   const before = t.mailbox.messages().length;
-  await request(t.app).post(`/api/orders/${orderId}/measurement-request`).set('Cookie', by.cookie).send({}).expect(201);
+  const res = await request(t.app).post(`/api/orders/${orderId}/measurement-request`).set('Cookie', by.cookie).send({}).expect(201);
   const mail = await t.mailbox.waitFor((m) => m.id > before && /\/measure\//.test(m.text));
-  return { token: /\/measure\/([A-Za-z0-9_-]{43})/.exec(mail.text)![1]!, mailText: mail.text };
+  return { token: /\/measure\/([A-Za-z0-9_-]{43})/.exec(mail.text)![1]!, mailText: mail.text, id: res.body.request.id };
 }

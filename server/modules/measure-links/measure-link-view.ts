@@ -9,4 +9,5 @@ export const measureLinkView = (r: MeasureLinkRow, nowMs: number): MeasurementRe
   expiresAt: iso(r.expires_at),
   answeredAt: r.answered_at !== null ? iso(Number(r.answered_at)) : null,
   expired: Number(r.expires_at) <= nowMs,
+  revoked: r.revoked_at !== null,
 });

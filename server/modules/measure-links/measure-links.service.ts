@@ -1,7 +1,8 @@
 // The customer's measuring link: a member e-mails it from an order; the public page explains
 // how to measure for the kind of piece and takes two readings that must agree; the answer
 // becomes a measurement of the wearer, gives the order its girth (moving it on from
-// "waiting for measurement") and mails the shop. A link works once and until it expires.
+// "waiting for measurement") and mails the shop. A link works once, until it expires, and until
+// a member withdraws it (a withdrawn link answers exactly as one that has run out).
 import type { z } from 'zod';
 import { cautionKind, cautionsFor } from '@shared/pattern/cautions.ts';
 import { MEASURE_KINDS, PART_FOR_KIND, PIECE_WORDS, formatGirth, type MeasureAnswerInput, measureAnswerSchema, type MeasurementRequestSchema } from '@shared/schemas/orders.ts';
@@ -18,6 +19,7 @@ import { parseOr400 } from '../../http/zod-fields.ts';
 import { createOrdersRepository, type ListedOrderRow } from '../orders/orders.repository.ts';
 import type { OrdersDeps } from '../orders/orders.service.ts';
 import { stageLabel } from '../orders/order-words.ts';
+import { idParam } from '../patterns/pattern-access.ts';
 import { createMeasureLinksRepository, shopRecipients, type MeasureLinkRow } from './measure-links.repository.ts';
 import { measureLinkView } from './measure-link-view.ts';
 
@@ -30,12 +32,14 @@ export function createMeasureLinksService(deps: OrdersDeps, orderOr404: (shopId:
   const orders = createOrdersRepository(db);
   const customers = createCustomersRepository(db);
 
-  /** The link and its order, or why it cannot be used (404 unknown, 410 used or expired). */
+  /** The link and its order, or why it cannot be used (404 unknown, 410 used, expired or withdrawn). */
   async function usable(token: string | undefined, q = db): Promise<{ link: MeasureLinkRow; order: ListedOrderRow }> {
     const link = plausibleToken(token) ? await links.byTokenHash(tokenHash(token), q) : undefined;
     const order = link ? await orders.byId(link.order_id, q) : undefined;
     if (!link || !order) throw notFound('measuring link');
     if (link.answered_at !== null) throw new HttpError(410, 'link_used', 'This measuring link has been used already; the shop has your measurement. Ask them for a new link to send another.');
+    // Withdrawn by the shop: the same answer as a link that has run out, so the page shows nothing of the order.
+    if (link.revoked_at !== null) throw new HttpError(410, 'link_expired', 'This measuring link has been withdrawn by the shop; ask them for a new one.');
     if (Number(link.expires_at) <= now()) throw new HttpError(410, 'link_expired', 'This measuring link has run out; ask the shop for a new one.');
     return { link, order };
   }
@@ -68,6 +72,21 @@ export function createMeasureLinksService(deps: OrdersDeps, orderOr404: (shopId:
       await outbox.flush();
       const row = (await links.ofOrder(order.id)).find((l) => l.id === id)!;
       return { request: measureLinkView(row, now()), mail: (await outbox.statusOf(mailId)) ?? 'queued' };
+    },
+
+    /** Withdraws an unanswered request of the asker's shop (another shop's id: 404); withdrawing twice changes nothing. */
+    async revoke(auth: AuthContext, raw: string | undefined): Promise<void> {
+      const id = idParam(raw);
+      const link = id === null ? undefined : await links.inShop(id, auth.shop.id);
+      if (!link) throw notFound('measurement request');
+      await writeTransaction(db, async (trx) => {
+        const fresh = (await links.inShop(link.id, auth.shop.id, trx))!;
+        if (fresh.answered_at !== null) throw new HttpError(409, 'request_answered', 'The customer has answered this request already, so there is nothing to withdraw.');
+        const t = now();
+        if ((await links.revoke(trx, fresh.id, t)) === 1) {
+          await orders.record(trx, { order_id: fresh.order_id, user_id: auth.user.id, kind: 'measurement-requested', summary: `Measuring link to ${fresh.email} withdrawn.`, at: t });
+        }
+      });
     },
 
     async page(token: string | undefined): Promise<MeasurePage> {
@@ -117,6 +136,7 @@ export function createMeasureLinksService(deps: OrdersDeps, orderOr404: (shopId:
           taken_by_label: 'Customer (measuring link)',
           created_at: t,
         });
+        // usable() above read the link inside this write transaction, so nothing came between.
         if ((await links.markAnswered(trx, link.id, measurementId, t)) !== 1) throw new HttpError(410, 'link_used', 'This measuring link has been used already.');
         // Leather already cut keeps its girth: the answer is kept on the wearer and the history says so.
         const fills = fresh.stage === 'waiting-for-measurement' || fresh.stage === 'ready-to-cut';

@@ -113,6 +113,14 @@ export function useRequestMeasurement(id: number) {
   });
 }
 
+export function useRevokeMeasurementRequest(orderId: number) {
+  const refetch = useOrderRefetch(orderId);
+  return useMutation({
+    mutationFn: (requestId: number) => api.delete<unknown>(`/api/measurement-requests/${requestId}`),
+    onSuccess: refetch,
+  });
+}
+
 export function useCreateProof(id: number) {
   const refetch = useOrderRefetch(id);
   return useMutation({

@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { TextAreaField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { formatWhen } from '@/lib/format-when.ts';
-import { useCreateProof, useRequestMeasurement, useRevokeProof } from '../../api/mutations.ts';
+import { useCreateProof, useRequestMeasurement, useRevokeMeasurementRequest, useRevokeProof } from '../../api/mutations.ts';
 
 const PROOF_STATUS = { open: 'Waiting for the customer', approved: 'Approved', 'change-requested': 'Change asked for' } as const;
 
@@ -15,6 +15,7 @@ const PROOF_STATUS = { open: 'Waiting for the customer', approved: 'Approved', '
  */
 export function CustomerLinksPanel({ order, canRequest, canProof }: { order: OrderDetail; canRequest: boolean; canProof: boolean }) {
   const request = useRequestMeasurement(order.id);
+  const withdraw = useRevokeMeasurementRequest(order.id);
   const proof = useCreateProof(order.id);
   const revoke = useRevokeProof(order.id);
   const [message, setMessage] = useState('');
@@ -53,14 +54,36 @@ export function CustomerLinksPanel({ order, canRequest, canProof }: { order: Ord
           </Notice>
         )}
         {order.measurementRequests.length > 0 && (
-          <ul className="grid gap-1 text-xs text-hide-700" data-testid="measurement-requests">
+          <ul className="grid gap-2 text-xs text-hide-700" data-testid="measurement-requests">
             {order.measurementRequests.map((r) => (
-              <li key={r.id}>
-                Sent to {r.sentTo}, {formatWhen(r.createdAt)} ·{' '}
-                {r.answeredAt ? <strong className="text-moss-700">answered {formatWhen(r.answeredAt)}</strong> : r.expired ? 'expired' : `open until ${formatWhen(r.expiresAt)}`}
+              <li key={r.id} className="grid gap-0.5">
+                <span className="break-words">
+                  Sent to {r.sentTo}, {formatWhen(r.createdAt)}
+                </span>
+                <span className="flex flex-wrap items-center gap-2">
+                  {r.answeredAt ? (
+                    <strong className="text-moss-700">answered {formatWhen(r.answeredAt)}</strong>
+                  ) : r.revoked ? (
+                    <span className="font-medium text-hide-900">revoked</span>
+                  ) : r.expired ? (
+                    'expired'
+                  ) : (
+                    `open until ${formatWhen(r.expiresAt)}`
+                  )}
+                  {canRequest && !r.answeredAt && !r.revoked && !r.expired && (
+                    <Button size="sm" variant="ghost" className="h-6 px-2 text-xs" aria-label="Revoke measurement request" busy={withdraw.isPending && withdraw.variables === r.id} onClick={() => withdraw.mutate(r.id)}>
+                      Revoke
+                    </Button>
+                  )}
+                </span>
               </li>
             ))}
           </ul>
+        )}
+        {withdraw.isError && (
+          <Notice tone="danger" role="alert" title="The request was not withdrawn">
+            {withdraw.error.message}
+          </Notice>
         )}
       </section>
 
