@@ -1,4 +1,4 @@
-import { memo } from 'react';
+import { memo, useMemo } from 'react';
 import type { Draft } from '@/components/pattern/draft.ts';
 import type { SizeRunResult } from '@/components/pattern/grade-run.ts';
 import { WarningsList } from '@/components/pattern/warnings-list.tsx';
@@ -9,15 +9,21 @@ import { SizeRunTable } from '@/components/pattern/size-run.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { Panel } from '@/components/ui/panel.tsx';
 import { BenchCard } from './bench-card.tsx';
-import { useLiveDraft } from './use-live-draft.ts';
+import { useLiveDraft, useSettledDraft } from './use-live-draft.ts';
 
 /**
  * What the engine says of the form's values beyond the drawing: the size run, warnings, the
- * fit at each hole, the shop rule beside the fitted length, and the cut list. The drawing and the summary live on
- * the bench card above ({@link BenchCard}). It is given the deferred draft (`settled` of
- * {@link useLiveDraft}), so it renders after the keystroke's frame, not in it.
+ * fit at each hole, the shop rule beside the fitted length, and the cut list. The drawing and
+ * the summary live on the bench card above ({@link BenchCard}). It is given the keystroke's
+ * draft and shows it deferred ({@link useSettledDraft}): the keystroke's render only passes
+ * through here, and the tables follow in a render of this component alone.
  */
-export const PreviewDetails = memo(function PreviewDetails({ draft, run }: { draft: Draft; run: SizeRunResult | null }) {
+export const PreviewDetails = memo(function PreviewDetails({ draft }: { draft: Draft }) {
+  const { settled, run } = useSettledDraft(draft);
+  return useMemo(() => <DetailsBody draft={settled} run={run} />, [settled, run]);
+});
+
+function DetailsBody({ draft, run }: { draft: Draft; run: SizeRunResult | null }) {
   if (draft.status === 'stopped') return null;
   const { layout } = draft;
   const unit = layout.units;
@@ -52,7 +58,7 @@ export const PreviewDetails = memo(function PreviewDetails({ draft, run }: { dra
       </div>
     </div>
   );
-});
+}
 
 /** The drawing, summary and details of a spec that is only read (a saved revision's page). */
 export function LivePreview({ values, revisionLabel }: { values: unknown; revisionLabel?: string }) {
@@ -60,7 +66,7 @@ export function LivePreview({ values, revisionLabel }: { values: unknown; revisi
   return (
     <div className="grid min-w-0 grid-cols-[minmax(0,1fr)] gap-4">
       <BenchCard draft={live.draft} lastSvg={live.lastSvg} />
-      <PreviewDetails draft={live.settled} run={live.run} />
+      <PreviewDetails draft={live.draft} />
     </div>
   );
 }

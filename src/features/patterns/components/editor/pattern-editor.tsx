@@ -209,7 +209,7 @@ export function PatternEditor({ detail, canEdit, canShare }: PatternEditorProps)
         form={formSlot}
         print={print}
         actions={actions}
-        details={<PreviewDetails draft={live.settled} run={live.run} />}
+        details={<PreviewDetails draft={live.draft} />}
       />
     </>
   );

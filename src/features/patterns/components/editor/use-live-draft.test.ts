@@ -2,7 +2,13 @@
 import { act, renderHook } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { presetSpec } from '@shared/pattern/presets/index.ts';
-import { useLiveDraft } from './use-live-draft.ts';
+import { useLiveDraft, useSettledDraft } from './use-live-draft.ts';
+
+/** The editor's two hooks as PatternEditor and PreviewDetails use them. */
+function useBoth(values: unknown, revision?: string) {
+  const live = useLiveDraft(values, revision);
+  return { ...live, ...useSettledDraft(live.draft) };
+}
 
 describe('the live draft behind the editor', () => {
   it('when the girth changes, then the first render already holds the new drawing and the details follow in a deferred one', async () => {
@@ -10,7 +16,7 @@ describe('the live draft behind the editor', () => {
     const renders: { draft: unknown; settled: unknown }[] = [];
     const { result, rerender } = renderHook(
       ({ values }) => {
-        const live = useLiveDraft(values, '1');
+        const live = useBoth(values, '1');
         renders.push({ draft: live.draft, settled: live.settled });
         return live;
       },
@@ -34,7 +40,7 @@ describe('the live draft behind the editor', () => {
 
   it('when a value is refused, then the last drawing that worked stays for the faded preview and the draft names the field', async () => {
     const collar = presetSpec('collar');
-    const { result, rerender } = renderHook(({ values }) => useLiveDraft(values, '1'), { initialProps: { values: collar as unknown } });
+    const { result, rerender } = renderHook(({ values }) => useBoth(values, '1'), { initialProps: { values: collar as unknown } });
     const good = result.current.draft;
     if (good.status !== 'drawn') throw new Error('the collar preset should draw');
     expect(result.current.lastSvg).toBe(good.svg);
@@ -54,7 +60,7 @@ describe('the live draft behind the editor', () => {
 
   it('when the spec has no size run, then nothing is graded; with one, the run is graded from the settled draft', async () => {
     const collar = presetSpec('collar');
-    const { result, rerender } = renderHook(({ values }) => useLiveDraft(values), { initialProps: { values: collar as unknown } });
+    const { result, rerender } = renderHook(({ values }) => useBoth(values), { initialProps: { values: collar as unknown } });
     expect(result.current.run).toBeNull();
     const sizes = [
       { name: 'S', girthMm: 304.8 },
