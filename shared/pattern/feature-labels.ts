@@ -1,14 +1,9 @@
 import type { DrawingItem } from '../render/drawing.ts';
 import type { PieceSpec } from '../schemas/strap-spec.ts';
 import { formatLength as formatLengthUnit, formatLengthBare as formatLengthBareUnit } from '../units/format-length.ts';
-import * as drawLabels from './draw-labels.ts';
+import { ASCENT_PER_EM, codePointCount, DESCENT_PER_EM, GLYPH_ADVANCE, LABEL_SIZE_MM, NAME_SIZE_MM, label, labelLine, textLengthMm } from './draw-labels.ts';
 import { packLanes } from './label-lanes.ts';
 import type { Feature, PieceLayout } from './layout-types.ts';
-
-// Read once, here: tsx, which runs the server and the benchmarks, compiles modules to CommonJS,
-// where every use of an imported name calls a getter (two, chained), and these are used for every
-// word and label (the getters were 5 % of drawLayout's CPU profile).
-const { ASCENT_PER_EM, codePointCount, DESCENT_PER_EM, GLYPH_ADVANCE, LABEL_SIZE_MM, NAME_SIZE_MM, label, labelLine, textLengthMm } = drawLabels;
 
 // formatLength builds a Fraction for every inch value, and the same lengths recur on every
 // station, caption and redraw (a tenth of drawLayout's profile): their text is remembered.

@@ -1,12 +1,6 @@
 import { LAYERS, type BoxMm, type Drawing, type DrawingItem, type DrawingPiece, type LayerName, type PathCommand, type PathItem, type TextItem, type TitleBlock } from './drawing.ts';
-import * as serialize from './svg-serialize.ts';
-import * as style from './svg-style.ts';
-
-// Read once, here: tsx, which runs the server and the benchmarks, compiles modules to CommonJS,
-// where every use of an imported name calls a getter (two, chained); svgNumber runs some 600
-// times per collar SVG (the escape function's getter alone was 5 % of the writer's CPU profile).
-const { escapeXmlAttr, escapeXmlText } = serialize;
-const { layerStyle, svgNumber: n } = style;
+import { escapeXmlAttr, escapeXmlText } from './svg-serialize.ts';
+import { layerStyle, svgNumber as n } from './svg-style.ts';
 
 /**
  * A DOM the SVG used to be built in (the browser's own, jsdom/happy-dom, or svgdom in Node).
