@@ -14,7 +14,8 @@ describe('D-rings and keepers', () => {
     for (const r of rings) {
       expect(r.zoneMm[0]).toBeCloseTo(from, 6);
       expect(r.zoneMm[1]).toBeCloseTo(to, 6);
-      expect(r.note).toContain('from memory');
+      // The note is printed for the maker: how the ring sits, not where the rule came from.
+      expect(r.note).toBe('rides in the fold loop beside the buckle');
     }
     expect(rings[0]!.atMm).toBeCloseTo(from + (to - from) / 3, 6);
     expect(rings[1]!.atMm).toBeCloseTo(from + (2 * (to - from)) / 3, 6);

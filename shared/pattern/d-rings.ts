@@ -44,7 +44,7 @@ export function placeDRings(spec: StrapSpec, strap: PieceLayout, startIsFoldOver
     insideWidthMm: dr.insideWidthMm,
     wireDiameterMm: dr.wireDiameterMm,
     zoneMm: [from, to],
-    note: 'rides in the fold loop beside the buckle (from memory)',
+    note: 'rides in the fold loop beside the buckle',
   }));
   return { placements, warnings };
 }

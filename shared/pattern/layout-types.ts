@@ -104,7 +104,7 @@ export interface HardwarePlacement {
   wireDiameterMm: number;
   /** The stretch of the fold loop the ring may ride in, mm from the datum. */
   zoneMm: [number, number];
-  /** How sure the placement is ("from memory", "common practice"). */
+  /** A few words for the maker on how the ring sits (printed with the hardware label). */
   note: string;
 }
 
