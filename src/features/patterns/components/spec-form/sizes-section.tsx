@@ -30,7 +30,14 @@ function SizeName({ control, index, disabled }: { control: SpecControl; index: n
   );
 }
 
-const hasGrading = (s: { widthMm?: unknown; holes?: unknown; hardware?: unknown } | undefined) => !!s && (s.widthMm !== undefined || s.holes !== undefined || s.hardware !== undefined);
+type SizeOverrides = { widthMm?: unknown; holes?: { count?: unknown; spacingMm?: unknown } | null; hardware?: { buckleInsideWidthMm?: unknown } | null };
+const given = (v: unknown) => v !== undefined && v !== null && v !== '';
+/**
+ * Whether the size overrides anything. A saved size comes back with empty override groups
+ * ({ holes: {} }), so the groups' values are what count: opening every size's grading after a
+ * save, empty or not, buried the run under closed-looking-but-open boxes.
+ */
+const hasGrading = (s: SizeOverrides | undefined) => !!s && (given(s.widthMm) || given(s.holes?.count) || given(s.holes?.spacingMm) || given(s.hardware?.buckleInsideWidthMm));
 
 /**
  * What this size grades besides its girth: width, tip holes and buckle. Left empty, a value
