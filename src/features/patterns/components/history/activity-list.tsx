@@ -3,8 +3,8 @@ import type { ActivityItem } from '@shared/schemas/library-views.ts';
 
 const num = (v: unknown) => (typeof v === 'number' ? v : undefined);
 
-/** The audit trail in sentences; unknown actions still show, by their code. */
-function sentence(item: ActivityItem): string {
+/** The audit trail in sentences; an action this list does not know yet reads as a change, never as its code. */
+export function activitySentence(item: ActivityItem): string {
   const d = item.detail;
   switch (item.action) {
     case 'pattern.created':
@@ -25,8 +25,12 @@ function sentence(item: ActivityItem): string {
       return num(d.revision) ? `made a share link to revision ${num(d.revision)}` : 'made a share link to the latest revision';
     case 'share.revoked':
       return 'revoked a share link';
+    case 'photo.added':
+      return 'added a photo';
+    case 'photo.deleted':
+      return 'removed a photo';
     default:
-      return item.action;
+      return 'made a change';
   }
 }
 
@@ -37,8 +41,9 @@ export function ActivityList({ items }: { items: readonly ActivityItem[] }) {
       {items.map((i) => (
         <li key={i.id} className="flex flex-wrap gap-x-2">
           <span className="font-medium text-hide-900">{i.by?.name ?? 'Someone'}</span>
-          <span className="text-hide-800">{sentence(i)}</span>
-          <span className="text-hide-500">· {formatWhen(i.at)}</span>
+          <span className="text-hide-800">{activitySentence(i)}</span>
+          {/* The date keeps to one line: wrapped, its time stood alone under the next entry. */}
+          <span className="whitespace-nowrap text-hide-500">· {formatWhen(i.at)}</span>
         </li>
       ))}
     </ol>
