@@ -3,6 +3,7 @@ import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query';
 import { can } from '@shared/schemas/permissions.ts';
 import { meQueryOptions } from '@/features/auth/api/queries.ts';
 import { isSignedIn } from '@/features/auth/api/signed-in.ts';
+import { orderFiltersToSearch } from '@/features/orders/api/filters.ts';
 import { ordersQueryOptions } from '@/features/orders/api/queries.ts';
 import { OrderBoard } from '@/features/orders/components/board/order-board.tsx';
 import { OrdersHeader } from '@/features/orders/components/orders-header.tsx';
@@ -17,7 +18,7 @@ export const clientLoader = (queryClient: QueryClient): LoaderFunction => async 
   return null;
 };
 
-/** Every order in a column of its stage, soonest due first. */
+/** Every working order in a column of its stage, soonest due first; the latest handed over. */
 export function Component() {
   const { data: me } = useSuspenseQuery(meQueryOptions());
   const { data } = useSuspenseQuery(ordersQueryOptions(BOARD_FILTERS));
@@ -31,7 +32,12 @@ export function Component() {
           <p className="mt-1 text-sm text-hide-700">An order takes a customer, a saved pattern and a girth; start one with “New order”.</p>
         </div>
       ) : (
-        <OrderBoard orders={data.items} orderHref={paths.orders.detail.getHref} canMove={can(me.role, 'orders.move')} />
+        <OrderBoard
+          orders={data.items}
+          orderHref={paths.orders.detail.getHref}
+          allInStageHref={(stage) => paths.orders.table.getHref(orderFiltersToSearch({ stage: [stage], sort: 'updated' }).toString())}
+          canMove={can(me.role, 'orders.move')}
+        />
       )}
     </div>
   );
