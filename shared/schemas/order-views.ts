@@ -199,6 +199,8 @@ export interface OrderDetail extends OrderSummary {
   notes: string;
   benchMinutes: number;
   hardware: { itemId: string; quantity: number }[];
+  /** True when the shop chose the hardware lines; false when they are matched from the pattern by kind. */
+  hardwareChosen: boolean;
   /** Lengths of the fitted piece for the order screen (null while waiting for a girth). */
   fitted: { finishedLengthMm: number; fitRangeMm: [number, number] | null; blankLengthMm: number } | null;
   price: PriceView | null;

@@ -108,7 +108,7 @@ export const eventView = (e: OrderEventRow): OrderEvent => ({
 });
 
 /** The parts of OrderDetail that come from the order row itself. */
-export function detailCore(row: ListedOrderRow, ctx: PriceContext): Pick<OrderDetail, 'customerEmail' | 'wearerId' | 'fit' | 'leatherId' | 'thread' | 'notes' | 'benchMinutes' | 'hardware' | 'fitted' | 'price' | 'createdBy'> {
+export function detailCore(row: ListedOrderRow, ctx: PriceContext): Pick<OrderDetail, 'customerEmail' | 'wearerId' | 'fit' | 'leatherId' | 'thread' | 'notes' | 'benchMinutes' | 'hardware' | 'hardwareChosen' | 'fitted' | 'price' | 'createdBy'> {
   const fitted = safeFitted(row);
   const price = priceOf(row, fitted, ctx);
   const fit: OrderDetail['fit'] =
@@ -123,6 +123,7 @@ export function detailCore(row: ListedOrderRow, ctx: PriceContext): Pick<OrderDe
     notes: row.notes,
     benchMinutes: row.bench_minutes,
     hardware,
+    hardwareChosen: row.hardware !== null,
     fitted: fitted ? fittedLengths(fitted.layout) : null,
     price,
     createdBy: row.created_by !== null ? { id: row.created_by, name: row.created_by_name ?? '' } : null,

@@ -33,7 +33,7 @@ export function NewOrderForm({ customers, patterns, leathers, initial, onCreated
   const createOrder = useCreateOrder();
   const createBoth = useCreateCustomerWithWearer();
   const [problem, setProblem] = useState<string>();
-  const { register, handleSubmit, setError, formState, watch } = useForm<NewOrderValues>({
+  const { register, control, handleSubmit, setError, formState, watch } = useForm<NewOrderValues>({
     defaultValues: {
       customerId: initial.customerId ? String(initial.customerId) : '',
       newCustomer: { name: '', email: '', phone: '' },
@@ -50,6 +50,8 @@ export function NewOrderForm({ customers, patterns, leathers, initial, onCreated
       thread: '',
       notes: '',
       benchMinutes: 60,
+      hardwareFrom: 'pattern',
+      hardware: [],
     },
   });
   const customerId = watch('customerId');
@@ -127,7 +129,7 @@ export function NewOrderForm({ customers, patterns, leathers, initial, onCreated
         </Notice>
       )}
       <Panel title="Details">
-        <OrderDetailFields register={register} errors={formState.errors} leathers={leathers} />
+        <OrderDetailFields register={register} control={control} errors={formState.errors} leathers={leathers} />
       </Panel>
       {problem && (
         <Notice tone="danger" role="alert" title="The order was not made">

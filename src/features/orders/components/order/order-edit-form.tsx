@@ -9,11 +9,11 @@ import { useUpdateOrder } from '../../api/mutations.ts';
 import { ORDER_DETAIL_FIELDS, OrderDetailFields, detailBody, type OrderDetailValues } from '../order-detail-fields.tsx';
 import { parseInto } from '../zod-to-form.ts';
 
-/** Due date, quantity, leather, thread, notes and bench time of an order, changed in place. */
+/** Due date, quantity, leather, thread, notes, bench time and hardware of an order, changed in place. */
 export function OrderEditForm({ order, leathers, onDone }: { order: OrderDetail; leathers: ShopPricingView['leathers']; onDone: () => void }) {
   const update = useUpdateOrder(order.id);
   const [problem, setProblem] = useState<string>();
-  const { register, handleSubmit, setError, formState } = useForm<OrderDetailValues>({
+  const { register, control, handleSubmit, setError, formState } = useForm<OrderDetailValues>({
     defaultValues: {
       dueDate: order.dueDate,
       quantity: order.quantity,
@@ -23,6 +23,9 @@ export function OrderEditForm({ order, leathers, onDone }: { order: OrderDetail;
       thread: order.thread,
       notes: order.notes,
       benchMinutes: order.benchMinutes,
+      // The lines the order uses now (matched ones too), so "Choose lines" starts from them.
+      hardwareFrom: order.hardwareChosen ? 'lines' : 'pattern',
+      hardware: order.hardware.map((h) => ({ itemId: h.itemId, quantity: h.quantity })),
     },
   });
   const onSubmit = handleSubmit(async (v) => {
@@ -38,7 +41,7 @@ export function OrderEditForm({ order, leathers, onDone }: { order: OrderDetail;
   });
   return (
     <form onSubmit={onSubmit} noValidate className="grid gap-4" aria-label="Edit the order">
-      <OrderDetailFields register={register} errors={formState.errors} leathers={leathers} />
+      <OrderDetailFields register={register} control={control} errors={formState.errors} leathers={leathers} />
       {problem && (
         <Notice tone="danger" role="alert">
           {problem}
