@@ -36,6 +36,17 @@ export const StandardItemIdSchema = z.string().regex(/^[a-z0-9][a-z0-9-]{0,39}$/
 export const HARDWARE_KINDS = ['buckle', 'd-ring', 'ring', 'snap', 'swivel', 'slider', 'rivet', 'other'] as const;
 /** One of {@link HARDWARE_KINDS}. */
 export type HardwareKind = (typeof HARDWARE_KINDS)[number];
+/** The kinds in words, as the Shop page's hardware list and the order forms name them. */
+export const HARDWARE_KIND_LABELS: Record<HardwareKind, string> = {
+  buckle: 'Buckle',
+  'd-ring': 'D-ring',
+  ring: 'Ring',
+  snap: 'Snap',
+  swivel: 'Swivel snap',
+  slider: 'Slider',
+  rivet: 'Rivet',
+  other: 'Other',
+};
 
 /**
  * One item of hardware the shop stocks. Buckles by inside width and tongue, rings and

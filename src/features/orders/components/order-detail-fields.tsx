@@ -2,7 +2,7 @@ import { useId } from 'react';
 import { useFieldArray, useWatch, type Control, type FieldErrors, type Path, type UseFormRegister } from 'react-hook-form';
 import { useQuery } from '@tanstack/react-query';
 import type { ShopPricingView } from '@shared/schemas/order-views.ts';
-import type { HardwareItem, HardwareKind, ShopStandardsView } from '@shared/schemas/shop-standards.ts';
+import { HARDWARE_KIND_LABELS, type HardwareItem, type ShopStandardsView } from '@shared/schemas/shop-standards.ts';
 import type { LengthUnit } from '@shared/units/length.ts';
 import { formatLength } from '@shared/units/format-length.ts';
 import { Button } from '@/components/ui/button.tsx';
@@ -11,17 +11,6 @@ import { formatMoney } from '@/lib/format-money.ts';
 import { api } from '@/lib/api-client.ts';
 import { pricingQueryOptions } from '../api/queries.ts';
 
-/** The kinds in words, as the Shop page's hardware list names them. */
-const KIND_WORDS: Record<HardwareKind, string> = {
-  buckle: 'Buckle',
-  'd-ring': 'D-ring',
-  ring: 'Ring',
-  snap: 'Snap',
-  swivel: 'Swivel snap',
-  slider: 'Slider',
-  rivet: 'Rivet',
-  other: 'Other',
-};
 
 /**
  * The shop's hardware list for the order forms. Read under the orders' own key (features do not
@@ -91,7 +80,7 @@ export function detailBody(v: OrderDetailValues) {
 export function hardwareItemWords(item: HardwareItem, unit: LengthUnit, currency: string | undefined): string {
   const size =
     item.insideWidthMm !== undefined ? `${formatLength(item.insideWidthMm, unit)} inside` : item.postLengthMm !== undefined ? `${formatLength(item.postLengthMm, unit)} post` : '';
-  const what = [KIND_WORDS[item.kind], size].filter(Boolean).join(', ');
+  const what = [HARDWARE_KIND_LABELS[item.kind], size].filter(Boolean).join(', ');
   const cost = currency ? `, ${formatMoney(item.unitCostCents, currency)} each` : '';
   return `${item.name || 'Unnamed item'} (${what})${cost}`;
 }

@@ -1,21 +1,11 @@
 import { useController, useFieldArray, useWatch, type FieldPath } from 'react-hook-form';
-import { HARDWARE_KINDS, type HardwareItem, type HardwareKind, type ShopStandardsInput } from '@shared/schemas/shop-standards.ts';
+import { HARDWARE_KIND_LABELS, HARDWARE_KINDS, type HardwareItem, type HardwareKind, type ShopStandardsInput } from '@shared/schemas/shop-standards.ts';
 import type { LengthUnit } from '@shared/units/length.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { MoneyField } from './money-field.tsx';
 import { StandardLengthField, type StandardsControl } from './standard-length-field.tsx';
 
-export const HARDWARE_KIND_LABELS: Record<HardwareKind, string> = {
-  buckle: 'Buckle',
-  'd-ring': 'D-ring',
-  ring: 'Ring',
-  snap: 'Snap',
-  swivel: 'Swivel snap',
-  slider: 'Slider',
-  rivet: 'Rivet',
-  other: 'Other',
-};
 
 /** What a freshly typed item carries, so every field its type shows has a value. */
 function itemOfKind(kind: HardwareKind, keep: Pick<HardwareItem, 'id' | 'name' | 'unitCostCents'>): HardwareItem {
