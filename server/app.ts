@@ -35,7 +35,7 @@ import { createTransferService } from './modules/transfer/transfer.service.ts';
 import { shareRoutes } from './modules/share/share.routes.ts';
 import { createShareService } from './modules/share/share.service.ts';
 import { printJobsRoutes } from './modules/downloads/print-jobs.routes.ts';
-import { createPrintJobsService } from './modules/downloads/print-jobs.service.ts';
+import { createPrintJobsService, type PrintRunner } from './modules/downloads/print-jobs.service.ts';
 import type { PrintJobLimits } from './modules/downloads/print-job-table.ts';
 import type { FileStore } from './modules/storage/file-store.ts';
 import { fileStoreFor } from './modules/storage/choose-file-store.ts';
@@ -55,6 +55,8 @@ export interface AppDeps {
   mail?: { transport?: Transporter; mailbox?: Mailbox };
   /** Bounds of the in-memory print-job table (queue size, lifetimes); defaults suit a shop. */
   printJobs?: Partial<PrintJobLimits>;
+  /** What renders a posted print job (default the print worker); tests hold jobs in the queue with it. */
+  printRunner?: PrintRunner;
   /** Where uploaded photos live (default: S3_BUCKET when set, else the disk under config.uploadDir). */
   fileStore?: FileStore;
   /** The clock of the orders side (measuring-link expiry, order times); tests move it. */
@@ -73,7 +75,7 @@ export const internalsOf = (app: Express) => app.locals.latchet as AppInternals;
 /** Default location of the client build. */
 export const CLIENT_DIR = fileURLToPath(new URL('../dist/client', import.meta.url));
 
-export function createApp({ db, config, fileStore, now, clientDir = CLIENT_DIR, log, mail, printJobs }: AppDeps): Express {
+export function createApp({ db, config, fileStore, now, clientDir = CLIENT_DIR, log, mail, printJobs, printRunner }: AppDeps): Express {
   const app = express();
   app.set('trust proxy', config.trustProxy);
   app.disable('x-powered-by');
@@ -134,7 +136,7 @@ export function createApp({ db, config, fileStore, now, clientDir = CLIENT_DIR, 
   api.use(compareRoutes(deps));
   const shares = createShareService(deps, repos.shares);
   api.use(shareRoutes(shares));
-  api.use(printJobsRoutes(deps, revisions, shares, createPrintJobsService(printJobs, log ?? ((e) => console.error(e)))));
+  api.use(printJobsRoutes(deps, revisions, shares, createPrintJobsService(printJobs, log ?? ((e) => console.error(e)), printRunner)));
   api.use(membersRoutes(createMembersService(db, repos.members, repos.audit)));
   api.use(invitesRoutes(createInvitesService(deps, repos.invites, repos.members), { service: authService, repo: authRepo, lucia }, config));
   api.use(settingsRoutes(repos.follows));

@@ -5,7 +5,7 @@ import { PDFDocument } from 'pdf-lib';
 import { afterEach, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp, type TestAppOptions } from '../helpers/test-app.ts';
 import { buildWorld, type ShopWorld } from '../helpers/shop-world.ts';
-import { binary, pollJob, postJob, type JobBody } from '../helpers/print-jobs.ts';
+import { binary, heldPrints, pollJob, postJob, steppedPrints, type JobBody } from '../helpers/print-jobs.ts';
 import { freezeDate } from '../helpers/frozen-date.ts';
 import { DEFAULT_PRINT_JOB_LIMITS } from '../../server/modules/downloads/print-job-table.ts';
 
@@ -31,14 +31,16 @@ const pages = async (pdf: Buffer) => (await PDFDocument.load(pdf)).getPageCount(
 
 describe('print jobs', () => {
   it('when a five-size run is posted, then progress only grows, it ends done, and its PDF has the synchronous download\'s pages', async () => {
-    const { t, w, jobs } = await world();
+    // One progress message per poll: the states in between are seen however fast it prints.
+    const stepped = steppedPrints();
+    const { t, w, jobs } = await world({ deps: { printRunner: stepped.run } });
     const res = await request(t.app).post(jobs).set('Cookie', w.apprentice.cookie).send({ paper: 'letter', size: 'all' }).expect(202);
     const job = res.body.job as JobBody;
     expect(res.headers.location).toBe(`/api/print-jobs/${job.id}`);
     expect(job.state).toBe('queued');
     expect(job.fileName).toMatch(/-r2-all-sizes-letter\.pdf$/);
 
-    const seen = await pollJob(t.app, res.headers.location!, w.apprentice.cookie);
+    const seen = await pollJob(t.app, res.headers.location!, w.apprentice.cookie, 5, 60_000, stepped.step);
     const last = seen[seen.length - 1]!;
     expect(last.state, JSON.stringify(last.error)).toBe('done');
     expect(last.progress).toBe(1);
@@ -60,11 +62,13 @@ describe('print jobs', () => {
   });
 
   it('when the file is asked for before the job is done, then 409 says the state', async () => {
-    const { t, w, jobs } = await world();
+    const held = heldPrints();
+    const { t, w, jobs } = await world({ deps: { printRunner: held.run } });
     const job = await postJob(t.app, jobs, { size: 'all' }, w.maker.cookie);
     const res = await request(t.app).get(job.fileUrl).set('Cookie', w.maker.cookie).expect(409);
     expect(res.body.error.code).toBe('print_job_not_done');
     expect(res.body.error.job.id).toBe(job.id);
+    held.release();
     await pollJob(t.app, job.url, w.maker.cookie, 20);
   });
 
@@ -99,8 +103,10 @@ describe('print jobs', () => {
   });
 
   it("when a shop's share of the queue is full, then the next job answers 429 with Retry-After, and is accepted once one finishes", async () => {
-    const { t, w, jobs } = await world({ deps: { printJobs: { maxPendingPerOwner: 2 } } });
+    const held = heldPrints();
+    const { t, w, jobs } = await world({ deps: { printJobs: { maxPendingPerOwner: 2 }, printRunner: held.run } });
     const answers = await Promise.all([0, 1, 2].map(() => request(t.app).post(jobs).set('Cookie', w.maker.cookie).send({ size: 'all' })));
+    held.release();
     expect(answers.map((a) => a.status).sort()).toEqual([202, 202, 429]);
     const full = answers.find((a) => a.status === 429)!;
     expect(full.body.error.code).toBe('print_queue_full');
@@ -112,11 +118,13 @@ describe('print jobs', () => {
   });
 
   it('when the whole queue is full, then another shop is refused too (429, server scope)', async () => {
-    const { t, w, jobs } = await world({ deps: { printJobs: { maxPending: 1 } } });
+    const held = heldPrints();
+    const { t, w, jobs } = await world({ deps: { printJobs: { maxPending: 1 }, printRunner: held.run } });
     const own = await postJob(t.app, jobs, { size: 'all' }, w.maker.cookie);
     const outsiderPattern = await request(t.app).post('/api/patterns').set('Cookie', w.outsider.cookie).send({ name: 'Bosun lead', kind: 'collar', spec: w.collar.head.spec }).expect(201);
     const res = await request(t.app).post(`/api/patterns/${outsiderPattern.body.pattern.id}/revisions/1/print-jobs`).set('Cookie', w.outsider.cookie).send({}).expect(429);
     expect(res.body.error.scope).toBe('server');
+    held.release();
     await pollJob(t.app, own.url, w.maker.cookie, 20);
   });
 

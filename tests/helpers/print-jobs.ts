@@ -2,6 +2,9 @@
 import request from 'supertest';
 import type { Express } from 'express';
 import type { PrintJobView } from '@shared/schemas/library-views.ts';
+import type { PrintRunner } from '../../server/modules/downloads/print-jobs.service.ts';
+import type { PrintProgress } from '../../server/modules/print/index.ts';
+import { runPrintJob } from '../../server/modules/print/index.ts';
 
 /** The job shape the API answers: the one definition the server and client share. */
 export type JobBody = PrintJobView;
@@ -27,7 +30,7 @@ export async function postJob(app: Express, path: string, body: object = {}, coo
  * Polls the job at `url` every `everyMs` until it is done or failed (at most `timeoutMs`);
  * returns every answer seen, the last one settled.
  */
-export async function pollJob(app: Express, url: string, cookie?: string, everyMs = 5, timeoutMs = 60_000): Promise<JobBody[]> {
+export async function pollJob(app: Express, url: string, cookie?: string, everyMs = 5, timeoutMs = 60_000, afterEachPoll?: () => void): Promise<JobBody[]> {
   const seen: JobBody[] = [];
   const until = Date.now() + timeoutMs;
   for (;;) {
@@ -39,6 +42,46 @@ export async function pollJob(app: Express, url: string, cookie?: string, everyM
     seen.push(job);
     if (job.state === 'done' || job.state === 'failed') return seen;
     if (Date.now() > until) throw new Error(`job ${url} still ${job.state} after ${timeoutMs} ms`);
+    afterEachPoll?.();
     await new Promise((r) => setTimeout(r, everyMs));
   }
+}
+
+/**
+ * A print runner (the app's `printRunner`) that holds every job queued until `release()`, then
+ * renders it on the real worker. A queue-full test needs its first job still open when the next
+ * one is posted; on a fast machine a five-size run had finished before that (a few ms).
+ */
+export function heldPrints(): { run: PrintRunner; release: () => void } {
+  let release!: () => void;
+  const gate = new Promise<void>((resolve) => (release = resolve));
+  return { run: (job, onProgress) => gate.then(() => runPrintJob(job, onProgress)), release };
+}
+
+/**
+ * A print runner that renders on the real worker but hands the job table one progress message,
+ * and at the end the file, per `step()`: a test that polls and steps in turn sees every state
+ * in between, however fast the machine prints (pollJob's afterEachPoll is the place to step).
+ */
+export function steppedPrints(): { run: PrintRunner; step: () => void } {
+  // A step with nothing waiting is dropped, not saved up: the polls made while the worker
+  // renders would otherwise release every message at once.
+  let wake: (() => void) | undefined;
+  const turn = () => new Promise<void>((resolve) => (wake = resolve));
+  const step = () => {
+    const w = wake;
+    wake = undefined;
+    w?.();
+  };
+  const run: PrintRunner = async (job, onProgress) => {
+    const messages: PrintProgress[] = [];
+    const file = await runPrintJob(job, (p) => messages.push(p));
+    for (const p of messages) {
+      await turn();
+      onProgress?.(p);
+    }
+    await turn();
+    return file;
+  };
+  return { run, step };
 }

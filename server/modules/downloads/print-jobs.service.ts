@@ -59,7 +59,10 @@ function jobError(e: unknown, log: (e: unknown) => void): JobError {
   return { code: 'print_failed', message: 'The print failed on the server; try again, and tell us if it fails again.' };
 }
 
-export function createPrintJobsService(limits: Partial<PrintJobLimits> = {}, log: (e: unknown) => void = () => undefined) {
+/** Renders a job and relays its progress: the print worker, or a stand-in a test controls. */
+export type PrintRunner = typeof runPrintJob;
+
+export function createPrintJobsService(limits: Partial<PrintJobLimits> = {}, log: (e: unknown) => void = () => undefined, run: PrintRunner = runPrintJob) {
   const table = createPrintJobTable({ ...DEFAULT_PRINT_JOB_LIMITS, ...limits });
 
   return {
@@ -88,7 +91,7 @@ export function createPrintJobsService(limits: Partial<PrintJobLimits> = {}, log
         throw e;
       }
       // Always the worker, even for one size: the request thread only relays messages.
-      runPrintJob({ spec, options, meta, format }, (p) => table.progress(job, p)).then(
+      run({ spec, options, meta, format }, (p) => table.progress(job, p)).then(
         (f: PrintedFile) => table.finish(job, f),
         (e: unknown) => table.fail(job, jobError(e, log)),
       );
