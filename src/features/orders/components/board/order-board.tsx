@@ -9,7 +9,7 @@ import { ORDER_STAGES, stageLabel } from '../../stages.ts';
 import { OrderCard } from './order-card.tsx';
 
 /**
- * Handed-over orders the board still shows, most recently moved first. The column is the
+ * Handed-over orders the board still shows, most recently changed first (an order is last changed when it is handed over, unless edited since). The column is the
  * bench's "just went out" shelf, not the shop's archive: it grew by every order ever finished.
  * The rest are a link away, in the table filtered to that stage.
  */
